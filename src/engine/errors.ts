@@ -1,0 +1,27 @@
+/**
+ * Typed engine errors. `kind` maps to the host's error values: "value" -> #VALUE!,
+ * "na" -> #N/A (not enough history yet, the normal state of a rolling table's first rows).
+ * The message always says what is wrong and what to do.
+ */
+export type EbbErrorKind = "value" | "na";
+
+export class EbbError extends Error {
+  readonly kind: EbbErrorKind;
+  readonly code: string;
+  constructor(kind: EbbErrorKind, code: string, message: string) {
+    super(message);
+    this.name = "EbbError";
+    this.kind = kind;
+    this.code = code;
+  }
+}
+
+/** #VALUE!-class error: the input is wrong and must be changed. */
+export function badInput(code: string, message: string): EbbError {
+  return new EbbError("value", code, message);
+}
+
+/** #N/A-class error: more history is needed. */
+export function notEnough(needed: number, has: number, what = "values"): EbbError {
+  return new EbbError("na", "not-enough-history", `Needs ${needed} ${what}, has ${has}. Add more history or shorten the start window.`);
+}

@@ -1,0 +1,18 @@
+/** Ebb's forecasting engine: the only place with mathematics. Everything else calls this. */
+export * from "./types";
+export * from "./errors";
+export * from "./options";
+export { cleanHistory, countPresent, allPositive, requirePositive } from "./series";
+export { centeredMovingAverage, classicalIndices, leastSquaresLine } from "./decompose";
+export { decompositionStart } from "./start/decompositionStart";
+export { classicStart } from "./start/classicStart";
+export { optimizedStart } from "./start/optimizedStart";
+export { runRecursion, projectState, sumSquaredErrors, RecursionWorkspace } from "./recursion";
+export { fitConstants, PHI_LOWER, PHI_UPPER } from "./fit";
+export { aicc } from "./aicc";
+export { fitModel, fitOne, modelStates, forecastModel, resolvePeriod, requiredLength, checkHorizon, type ModelOptions } from "./model";
+export { predictionInterval, checkCoverage, type Interval } from "./intervals";
+export { holdoutScore, rollingBacktest, seasonalNaiveScale, type HoldoutResult, type BacktestRow } from "./backtest";
+export { detectPeriod } from "./period";
+export { acf, seasonalityTest90 } from "./acf";
+export * from "./accuracy";

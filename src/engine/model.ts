@@ -1,0 +1,154 @@
+import { aicc } from "./aicc";
+import { badInput, notEnough } from "./errors";
+import { fitConstants, freeAxes, type ConstantChoice } from "./fit";
+import { checkConstant, checkPeriod, type SeasonalityChoice, type TrendChoice } from "./options";
+import { detectPeriod } from "./period";
+import { projectState, runRecursion } from "./recursion";
+import { allPositive, cleanHistory, countPresent, requirePositive } from "./series";
+import { classicStart } from "./start/classicStart";
+import { decompositionStart } from "./start/decompositionStart";
+import { optimizedStart } from "./start/optimizedStart";
+import type { FittedModel, Seasonality, Start, StartMethod, StateTable, TrendKind } from "./types";
+
+/** What a caller may say about a model; anything left out is detected, fitted or defaulted. */
+export interface ModelOptions {
+  /** Season length; 0 or undefined detects it. */
+  period?: number;
+  seasonality?: SeasonalityChoice;
+  trend?: TrendChoice;
+  start?: StartMethod;
+  cycles?: number;
+  alpha?: number;
+  beta?: number;
+  gamma?: number;
+  phi?: number;
+}
+
+/** Resolve the season length: a typed one, or detected from the history. */
+export function resolvePeriod(y: Float64Array, period: number | undefined): number {
+  const p = checkPeriod(period);
+  return p === 0 ? detectPeriod(y) : p;
+}
+
+/**
+ * Fit a model to a history. With seasonality or trend "auto", every candidate is fitted on
+ * the same update window and the one with the lowest AICc is returned.
+ */
+export function fitModel(history: ArrayLike<number | null | undefined>, options: ModelOptions = {}): FittedModel {
+  const y = history instanceof Float64Array ? history : cleanHistory(history);
+  if (countPresent(y) === 0) throw notEnough(1, 0);
+  const p = resolvePeriod(y, options.period);
+  const fixed: ConstantChoice = {
+    alpha: checkConstant("alpha", options.alpha),
+    beta: checkConstant("beta", options.beta),
+    gamma: checkConstant("gamma", options.gamma),
+    phi: checkConstant("phi", options.phi),
+  };
+  const start = options.start ?? "decomposition";
+  const cycles = options.cycles ?? 2;
+  const seasonalities = seasonalityCandidates(y, p, options.seasonality ?? "multiplicative");
+  const trends: TrendKind[] = (options.trend ?? "linear") === "auto" ? ["linear", "damped", "none"] : [options.trend as TrendKind];
+  if (seasonalities.length * trends.length === 1) return fitOne(y, p, seasonalities[0], trends[0], start, cycles, fixed);
+  let best: FittedModel | undefined;
+  let firstError: unknown;
+  for (const s of seasonalities) {
+    for (const t of trends) {
+      let m: FittedModel;
+      try {
+        m = fitOne(y, p, s, t, start, cycles, fixed);
+      } catch (e) {
+        firstError ??= e;
+        continue;
+      }
+      if (!best || better(m, best)) best = m;
+    }
+  }
+  if (!best) throw firstError;
+  return best;
+}
+
+function better(a: FittedModel, b: FittedModel): boolean {
+  const fa = Number.isFinite(a.aicc);
+  const fb = Number.isFinite(b.aicc);
+  if (fa && fb) return a.aicc < b.aicc;
+  if (fa !== fb) return fa;
+  return a.parameterCount < b.parameterCount;
+}
+
+function seasonalityCandidates(y: Float64Array, p: number, choice: SeasonalityChoice): Seasonality[] {
+  if (p < 2) return ["none"];
+  if (choice === "auto") return allPositive(y) ? ["multiplicative", "additive"] : ["additive"];
+  if (choice === "multiplicative") requirePositive(y);
+  return [choice];
+}
+
+/** History needed before a model with this start can be used (fitted or not). */
+export function requiredLength(p: number, seasonality: Seasonality, start: StartMethod, cycles: number, free: number): number {
+  const seasonal = seasonality !== "none" && p >= 2;
+  if (start === "classic") return seasonal ? 2 * p + 1 : 3;
+  const window = seasonal ? cycles * p : Math.max(2, cycles);
+  if (start === "optimized") return Math.max(window, free + (seasonal ? p + 1 : 2) + 2);
+  return window + (free > 0 ? free + 1 : 0);
+}
+
+/** Fit one fully specified model (seasonality and trend known). */
+export function fitOne(
+  y: Float64Array,
+  p: number,
+  seasonality: Seasonality,
+  trend: TrendKind,
+  startMethod: StartMethod,
+  cycles: number,
+  fixed: ConstantChoice,
+): FittedModel {
+  if (seasonality === "multiplicative") requirePositive(y);
+  const free = freeAxes(seasonality, trend, p, fixed).length;
+  const needed = requiredLength(p, seasonality, startMethod, cycles, free);
+  if (y.length < needed) throw notEnough(needed, y.length);
+  let start: Start;
+  let constants;
+  if (startMethod === "optimized") {
+    const seed = decompositionStart(y, p, seasonality, trend, cycles);
+    const guess = fitConstants(y, seed.state, seed.firstUpdate, p, seasonality, trend, fixed).constants;
+    ({ start, constants } = optimizedStart(y, p, seasonality, trend, cycles, fixed, guess));
+  } else {
+    start = startMethod === "classic" ? classicStart(y, p, seasonality, trend) : decompositionStart(y, p, seasonality, trend, cycles);
+    constants = fitConstants(y, start.state, start.firstUpdate, p, seasonality, trend, fixed).constants;
+  }
+  const run = runRecursion(y, start.state, start.firstUpdate, p, seasonality, trend, constants);
+  const seasonal = seasonality !== "none" && p >= 2;
+  const parameterCount = free + 1 + (trend === "none" ? 0 : 1) + (seasonal ? p - 1 : 0);
+  return {
+    spec: { period: seasonal ? p : 1, seasonality: seasonal ? seasonality : "none", trend, start: startMethod, cycles },
+    constants,
+    start,
+    final: run.final,
+    sse: run.sse,
+    errorCount: run.errorCount,
+    rmse: run.errorCount > 0 ? Math.sqrt(run.sse / run.errorCount) : NaN,
+    aicc: aicc(run.sse, run.errorCount, parameterCount),
+    parameterCount,
+    relativeSse: run.relativeSse,
+    history: y,
+  };
+}
+
+/** The state table of a fitted model over its own history. */
+export function modelStates(model: FittedModel): StateTable {
+  const { spec, start, constants, history } = model;
+  return runRecursion(history, start.state, start.firstUpdate, spec.period, spec.seasonality, spec.trend, constants).table;
+}
+
+/** Point forecasts for the next `horizon` periods after the history. */
+export function forecastModel(model: FittedModel, horizon: number): Float64Array {
+  checkHorizon(horizon);
+  const { spec, constants } = model;
+  return projectState(model.final, horizon, spec.period, spec.seasonality, spec.trend, constants.phi);
+}
+
+export function checkHorizon(horizon: number): number {
+  if (!Number.isInteger(horizon) || horizon < 1 || horizon > 1000) {
+    throw badInput("bad-horizon", `The horizon must be a whole number of periods from 1 to 1000; got ${String(horizon)}.`);
+  }
+  return horizon;
+}

@@ -1,0 +1,47 @@
+import { badInput } from "./errors";
+import type { Seasonality, StartMethod, TrendKind } from "./types";
+
+/** Option words as users type them (case-insensitive); a wrong one lists the accepted words. */
+export const SEASONALITY_WORDS = ["multiplicative", "additive", "auto"] as const;
+export const TREND_WORDS = ["linear", "damped", "none", "auto"] as const;
+export const START_WORDS = ["decomposition", "classic", "optimized"] as const;
+
+export type SeasonalityChoice = Seasonality | "auto";
+export type TrendChoice = TrendKind | "auto";
+
+function pick<T extends string>(what: string, words: readonly T[], value: unknown, fallback: T): T {
+  if (value === undefined || value === null || value === "") return fallback;
+  if (typeof value !== "string") {
+    throw badInput("bad-option", `${what} must be one of the words ${words.join(", ")}; got ${String(value)}.`);
+  }
+  const w = value.trim().toLowerCase() as T;
+  if (!words.includes(w)) {
+    throw badInput("bad-option", `Unknown ${what} "${value}". Use one of: ${words.join(", ")}.`);
+  }
+  return w;
+}
+
+export const parseSeasonality = (v: unknown, fallback: SeasonalityChoice = "multiplicative"): SeasonalityChoice =>
+  pick("seasonality", SEASONALITY_WORDS, v, fallback as (typeof SEASONALITY_WORDS)[number]);
+export const parseTrend = (v: unknown, fallback: TrendChoice = "linear"): TrendChoice =>
+  pick("trend", TREND_WORDS, v, fallback as (typeof TREND_WORDS)[number]);
+export const parseStart = (v: unknown, fallback: StartMethod = "decomposition"): StartMethod =>
+  pick("start", START_WORDS, v, fallback);
+
+/** A smoothing constant typed by the user: must lie in [lo, hi]. */
+export function checkConstant(name: string, v: number | undefined, lo = 0, hi = 1): number | undefined {
+  if (v === undefined || v === null) return undefined;
+  if (typeof v !== "number" || !Number.isFinite(v) || v < lo || v > hi) {
+    throw badInput("bad-constant", `${name} must be a number from ${lo} to ${hi}; got ${String(v)}. Leave it blank to fit it.`);
+  }
+  return v;
+}
+
+/** Season length: a whole number, 0 meaning "detect". */
+export function checkPeriod(v: number | undefined): number {
+  if (v === undefined || v === null) return 0;
+  if (typeof v !== "number" || !Number.isInteger(v) || v < 0 || v > 366) {
+    throw badInput("bad-period", `The season length must be a whole number from 1 to 366 (0 to detect it); got ${String(v)}.`);
+  }
+  return v;
+}

@@ -1,0 +1,29 @@
+/**
+ * Seeded pseudo-random numbers for the simulated prediction intervals, so the same inputs
+ * always give the same digits. mulberry32 (a public-domain 32-bit generator) feeds a
+ * Box-Muller transform for standard normal draws.
+ */
+export function seededNormal(seed: number): () => number {
+  let a = seed >>> 0;
+  const uniform = (): number => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+  let spare = NaN;
+  return () => {
+    if (!Number.isNaN(spare)) {
+      const s = spare;
+      spare = NaN;
+      return s;
+    }
+    let u = uniform();
+    while (u === 0) u = uniform();
+    const v = uniform();
+    const r = Math.sqrt(-2 * Math.log(u));
+    spare = r * Math.sin(2 * Math.PI * v);
+    return r * Math.cos(2 * Math.PI * v);
+  };
+}
