@@ -8,4 +8,5 @@ module.exports = {
     "^office-addin-manifest$": "<rootDir>/node_modules/office-addin-manifest/lib/officeApp.js",
   },
   testTimeout: 120000,
+  reporters: ["default", "<rootDir>/test/support/summaryReporter.js"],
 };

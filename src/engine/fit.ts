@@ -95,22 +95,24 @@ export function minimiseOverBox(objective: (x: ArrayLike<number>) => number, axe
     if (i === d) break;
   }
   candidates.sort((a, b) => a.fx - b.fx);
-  const options = (step: number) => ({
+  const options = (step: number, tight: boolean) => ({
     step: axes.map((a) => step * (a.upper - a.lower)),
     lower,
     upper,
     maxEvals: 400 * d,
-    fTol: 1e-11,
-    xTol: 1e-7,
+    fTol: tight ? 1e-11 : 1e-7,
+    xTol: tight ? 1e-7 : 1e-3,
   });
   let best: Minimum = { x: candidates[0].x, fx: candidates[0].fx, evals: 0 };
+  // A quick descent from the three best points finds the basin...
   for (const c of candidates.slice(0, 3)) {
-    const m = nelderMead(objective, c.x, options(0.1));
+    const m = nelderMead(objective, c.x, options(0.1, false));
     if (m.fx < best.fx) best = m;
   }
-  // Restarts with a fresh small simplex: Nelder-Mead can stall on a bound or a ridge.
+  // Polish the best with tight tolerances, restarting with a fresh small simplex: Nelder-Mead
+  // can stall on a bound or a ridge.
   for (let r = 0; r < 6; r++) {
-    const m = nelderMead(objective, best.x, options(r % 2 === 0 ? 0.02 : 0.002));
+    const m = nelderMead(objective, best.x, options(r % 2 === 0 ? 0.02 : 0.002, true));
     const improved = m.fx < best.fx * (1 - 1e-13);
     if (m.fx < best.fx) best = m;
     if (!improved) break;
