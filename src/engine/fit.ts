@@ -1,4 +1,6 @@
-import { nelderMead, type Minimum } from "./optimize/nelderMead";
+import { GradientWorkspace, sseWithGradient } from "./gradient";
+import type { Minimum } from "./optimize/nelderMead";
+import { projectedBfgs } from "./optimize/projectedBfgs";
 import { RecursionWorkspace, sumSquaredErrors } from "./recursion";
 import type { Constants, Seasonality, State, TrendKind } from "./types";
 
@@ -15,6 +17,8 @@ export const PHI_UPPER = 0.98;
 
 interface Axis {
   name: keyof Constants;
+  /** Position in (alpha, beta, gamma, phi). */
+  slot: number;
   lower: number;
   upper: number;
   grid: number[];
@@ -26,13 +30,13 @@ interface Axis {
 export function freeAxes(seasonality: Seasonality, trend: TrendKind, p: number, fixed: ConstantChoice): Axis[] {
   const axes: Axis[] = [];
   const unit = [0.1, 0.5, 0.9];
-  if (fixed.alpha === undefined) axes.push({ name: "alpha", lower: 0, upper: 1, grid: unit, usual: 0.3 });
-  if (trend !== "none" && fixed.beta === undefined) axes.push({ name: "beta", lower: 0, upper: 1, grid: unit, usual: 0.1 });
+  if (fixed.alpha === undefined) axes.push({ name: "alpha", slot: 0, lower: 0, upper: 1, grid: unit, usual: 0.3 });
+  if (trend !== "none" && fixed.beta === undefined) axes.push({ name: "beta", slot: 1, lower: 0, upper: 1, grid: unit, usual: 0.1 });
   if (seasonality !== "none" && p >= 2 && fixed.gamma === undefined) {
-    axes.push({ name: "gamma", lower: 0, upper: 1, grid: unit, usual: 0.1 });
+    axes.push({ name: "gamma", slot: 2, lower: 0, upper: 1, grid: unit, usual: 0.1 });
   }
   if (trend === "damped" && fixed.phi === undefined) {
-    axes.push({ name: "phi", lower: PHI_LOWER, upper: PHI_UPPER, grid: [0.85, 0.95], usual: 0.9 });
+    axes.push({ name: "phi", slot: 3, lower: PHI_LOWER, upper: PHI_UPPER, grid: [0.85, 0.95], usual: 0.9 });
   }
   return axes;
 }
@@ -50,10 +54,10 @@ export function constantsFrom(axes: Axis[], x: ArrayLike<number>, fixed: Constan
 
 /**
  * Smoothing constants minimising the sum of squared one-step errors from a given start.
- * Search: every point of a coarse grid and the usual quasi-Newton starting point are
- * evaluated; bounded Nelder-Mead runs from the three best, then restarts from the best
- * with a small simplex until it no longer improves. Several starts guard against the local
- * stops a single-start method makes on flat surfaces; everything is deterministic.
+ * Search: a bounded quasi-Newton descent with exact gradients from the usual starting point
+ * (alpha 0.3, beta 0.1, gamma 0.1) and from the two best points of a coarse grid; the best
+ * result wins. Several starts guard against the local stops a single descent makes on the
+ * flat, bounded surfaces these errors have; everything is deterministic.
  */
 export function fitConstants(
   y: Float64Array,
@@ -74,15 +78,26 @@ export function fitConstants(
     const c = constantsFrom(axes, [], fixed, trend);
     return { constants: c, sse: objective([]) };
   }
-  const best = minimiseOverBox(objective, axes);
+  const gws = new GradientWorkspace(p);
+  const theta = new Float64Array(4);
+  const full = new Float64Array(4);
+  const withGradient = (x: Float64Array, g: Float64Array): number => {
+    const c = constantsFrom(axes, x, fixed, trend);
+    theta[0] = c.alpha;
+    theta[1] = c.beta;
+    theta[2] = c.gamma;
+    theta[3] = c.phi;
+    const f = sseWithGradient(y, start, firstUpdate, p, seasonality, trend, theta, full, gws);
+    for (let i = 0; i < axes.length; i++) g[i] = full[axes[i].slot];
+    return f;
+  };
+  const best = minimiseWithGradient(objective, withGradient, axes);
   return { constants: constantsFrom(axes, best.x, fixed, trend), sse: best.fx };
 }
 
-/** Multi-start bounded Nelder-Mead over the axes' box. */
-export function minimiseOverBox(objective: (x: ArrayLike<number>) => number, axes: Axis[]): Minimum {
+/** Coarse grid over the box plus the usual starting point, best first. */
+function gridCandidates(objective: (x: ArrayLike<number>) => number, axes: Axis[]): { x: Float64Array; fx: number }[] {
   const d = axes.length;
-  const lower = axes.map((a) => a.lower);
-  const upper = axes.map((a) => a.upper);
   const candidates: { x: Float64Array; fx: number }[] = [];
   const usual = Float64Array.from(axes.map((a) => a.usual));
   candidates.push({ x: usual, fx: objective(usual) });
@@ -94,28 +109,29 @@ export function minimiseOverBox(objective: (x: ArrayLike<number>) => number, axe
     while (i < d && ++counter[i] === axes[i].grid.length) counter[i++] = 0;
     if (i === d) break;
   }
-  candidates.sort((a, b) => a.fx - b.fx);
-  const options = (step: number, tight: boolean) => ({
-    step: axes.map((a) => step * (a.upper - a.lower)),
-    lower,
-    upper,
-    maxEvals: 400 * d,
-    fTol: tight ? 1e-11 : 1e-7,
-    xTol: tight ? 1e-7 : 1e-3,
-  });
-  let best: Minimum = { x: candidates[0].x, fx: candidates[0].fx, evals: 0 };
-  // A quick descent from the three best points finds the basin...
-  for (const c of candidates.slice(0, 3)) {
-    const m = nelderMead(objective, c.x, options(0.1, false));
-    if (m.fx < best.fx) best = m;
-  }
-  // Polish the best with tight tolerances, restarting with a fresh small simplex: Nelder-Mead
-  // can stall on a bound or a ridge.
-  for (let r = 0; r < 6; r++) {
-    const m = nelderMead(objective, best.x, options(r % 2 === 0 ? 0.02 : 0.002, true));
-    const improved = m.fx < best.fx * (1 - 1e-13);
-    if (m.fx < best.fx) best = m;
-    if (!improved) break;
-  }
-  return best;
+  return candidates.sort((a, b) => a.fx - b.fx);
 }
+
+export function minimiseWithGradient(
+  objective: (x: ArrayLike<number>) => number,
+  withGradient: (x: Float64Array, g: Float64Array) => number,
+  axes: Axis[],
+): Minimum {
+  const lower = axes.map((a) => a.lower);
+  const upper = axes.map((a) => a.upper);
+  const usual = Float64Array.from(axes.map((a) => a.usual));
+  const starts = [usual, ...gridCandidates(objective, axes).slice(0, START_POINTS).map((c) => c.x)];
+  const found: Minimum[] = [];
+  // A descent that walks into the basin of an optimum already found is stopped early:
+  // it would only find the same point again.
+  const known = (x: Float64Array, f: number): boolean =>
+    found.some((m) => f >= m.fx && axes.every((a, i) => Math.abs(x[i] - m.x[i]) <= 0.01 * (a.upper - a.lower)));
+  for (const x0 of starts) found.push(projectedBfgs(withGradient, x0, { lower, upper, maxIter: 200, fTol: 1e-12, abandon: known }));
+  const best = found.reduce((a, b) => (b.fx < a.fx ? b : a));
+  // A fresh descent from the best point (new curvature estimate) finishes a stalled one.
+  const polished = projectedBfgs(withGradient, best.x, { lower, upper, maxIter: 200, fTol: 1e-13 });
+  return polished.fx < best.fx ? polished : best;
+}
+
+/** Grid points, besides the usual start, from which a descent is run. */
+const START_POINTS = 5;

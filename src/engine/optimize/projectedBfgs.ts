@@ -1,0 +1,121 @@
+import type { Minimum } from "./nelderMead";
+
+/**
+ * Bounded quasi-Newton minimisation with exact gradients: BFGS on the variables that are
+ * not held at a bound, with a projected backtracking (Armijo) line search (Bertsekas 1982,
+ * "Projected Newton methods for optimization problems with simple constraints", SIAM J.
+ * Control Optim. 20(2); BFGS update as in Nocedal & Wright 2006, ch. 6). A variable whose
+ * gradient pushes it against its bound is held there, so corner optima are reached exactly.
+ * Deterministic; bounded by maxIter.
+ */
+export interface ProjectedBfgsOptions {
+  lower: ArrayLike<number>;
+  upper: ArrayLike<number>;
+  maxIter: number;
+  /** Stop when two successive steps each lower f by less than this relative amount. */
+  fTol: number;
+  /** Optional early stop, asked after every accepted step (e.g. "this basin is known"). */
+  abandon?: (x: Float64Array, f: number) => boolean;
+}
+
+export function projectedBfgs(
+  fg: (x: Float64Array, g: Float64Array) => number,
+  x0: ArrayLike<number>,
+  o: ProjectedBfgsOptions,
+): Minimum {
+  const d = x0.length;
+  const x = new Float64Array(d);
+  for (let i = 0; i < d; i++) x[i] = Math.min(o.upper[i], Math.max(o.lower[i], x0[i]));
+  const g = new Float64Array(d);
+  let f = fg(x, g);
+  let evals = 1;
+  if (!Number.isFinite(f)) return { x, fx: Infinity, evals };
+  const H = new Float64Array(d * d);
+  const resetH = (scale: number): void => {
+    H.fill(0);
+    for (let i = 0; i < d; i++) H[i * d + i] = scale;
+  };
+  let gmax = 0;
+  for (let i = 0; i < d; i++) gmax = Math.max(gmax, Math.abs(g[i]));
+  resetH(gmax > 0 ? 0.1 / gmax : 1);
+  const dir = new Float64Array(d);
+  const xn = new Float64Array(d);
+  const gn = new Float64Array(d);
+  const s = new Float64Array(d);
+  const yv = new Float64Array(d);
+  const Hy = new Float64Array(d);
+  const free = new Array<boolean>(d);
+  let slow = 0;
+  for (let iter = 0; iter < o.maxIter; iter++) {
+    let anyFree = false;
+    for (let i = 0; i < d; i++) {
+      free[i] = !((x[i] <= o.lower[i] && g[i] > 0) || (x[i] >= o.upper[i] && g[i] < 0));
+      anyFree ||= free[i] && g[i] !== 0;
+    }
+    if (!anyFree) break;
+    let slope = 0;
+    for (let i = 0; i < d; i++) {
+      let v = 0;
+      if (free[i]) for (let j = 0; j < d; j++) if (free[j]) v -= H[i * d + j] * g[j];
+      dir[i] = v;
+      slope += v * g[i];
+    }
+    if (!(slope < 0)) {
+      // not a descent direction: fall back to steepest descent on the free variables
+      resetH(gmax > 0 ? 0.1 / gmax : 1);
+      slope = 0;
+      for (let i = 0; i < d; i++) {
+        dir[i] = free[i] ? -H[i * d + i] * g[i] : 0;
+        slope += dir[i] * g[i];
+      }
+    }
+    let t = 1;
+    let fn = Infinity;
+    let accepted = false;
+    for (let k = 0; k < 40; k++) {
+      let decrease = 0;
+      for (let i = 0; i < d; i++) {
+        xn[i] = Math.min(o.upper[i], Math.max(o.lower[i], x[i] + t * dir[i]));
+        decrease += g[i] * (xn[i] - x[i]);
+      }
+      fn = fg(xn, gn);
+      evals++;
+      if (Number.isFinite(fn) && fn <= f + 1e-4 * decrease) {
+        accepted = true;
+        break;
+      }
+      t *= 0.5;
+    }
+    if (!accepted) break;
+    let sy = 0;
+    let yHy = 0;
+    for (let i = 0; i < d; i++) {
+      s[i] = xn[i] - x[i];
+      yv[i] = gn[i] - g[i];
+      sy += s[i] * yv[i];
+    }
+    for (let i = 0; i < d; i++) {
+      let v = 0;
+      for (let j = 0; j < d; j++) v += H[i * d + j] * yv[j];
+      Hy[i] = v;
+      yHy += yv[i] * v;
+    }
+    if (sy > 1e-12 * Math.sqrt(yHy * sy + 1e-300)) {
+      // H <- H + ((sy + yHy) / sy^2) s s' - (Hy s' + s (Hy)') / sy
+      const a = (sy + yHy) / (sy * sy);
+      for (let i = 0; i < d; i++) {
+        for (let j = 0; j < d; j++) H[i * d + j] += a * s[i] * s[j] - (Hy[i] * s[j] + s[i] * Hy[j]) / sy;
+      }
+    }
+    const relative = (f - fn) / Math.max(Math.abs(f), 1e-300);
+    x.set(xn);
+    g.set(gn);
+    f = fn;
+    gmax = 0;
+    for (let i = 0; i < d; i++) gmax = Math.max(gmax, Math.abs(g[i]));
+    slow = relative < o.fTol ? slow + 1 : 0;
+    if (slow >= 2) break;
+    if (o.abandon && o.abandon(x, f)) break;
+  }
+  return { x, fx: f, evals };
+}
