@@ -2,6 +2,7 @@ import { badInput, notEnough } from "./errors";
 import { predictionInterval } from "./intervals";
 import { checkHorizon, fitModel, forecastModel, resolvePeriod, type ModelOptions } from "./model";
 import { cleanHistory } from "./series";
+import type { FittedModel } from "./types";
 
 /** Scores of forecasts made from one origin against the held-out actuals. */
 export interface HoldoutResult {
@@ -18,6 +19,8 @@ export interface HoldoutResult {
   bias: number;
   /** Share of held-out actuals inside the interval (when a coverage was asked for). */
   coverage?: number;
+  /** The model fitted on the training part. */
+  model: FittedModel;
 }
 
 /**
@@ -70,6 +73,7 @@ export function holdoutScore(
     mase: scale > 0 ? abs / n / scale : NaN,
     rmse: Math.sqrt(sq / n),
     bias: sum / n,
+    model,
   };
   if (low) result.coverage = inside / n;
   return result;

@@ -21,7 +21,7 @@ export function badInput(code: string, message: string): EbbError {
   return new EbbError("value", code, message);
 }
 
-/** #N/A-class error: more history is needed. */
-export function notEnough(needed: number, has: number, what = "values"): EbbError {
-  return new EbbError("na", "not-enough-history", `Needs ${needed} ${what}, has ${has}. Add more history or shorten the start window.`);
+/** #N/A-class error: more history is needed (the normal state of a rolling table's first rows). */
+export function notEnough(needed: number, has: number, what = "values", advice = "Add more history."): EbbError {
+  return new EbbError("na", "not-enough-history", `Needs ${needed} ${what}, has ${has}. ${advice}`);
 }

@@ -75,32 +75,33 @@ function simulated(model: FittedModel, forecast: Float64Array, coverage: number)
   const ph = trendKind === "damped" ? model.constants.phi : 1;
   const sigma = Math.sqrt(model.relativeSse / model.errorCount);
   const draw = seededNormal(SEED);
-  const paths = new Float64Array(PATHS * horizon);
-  const ring = new Float64Array(p);
-  for (let path = 0; path < PATHS; path++) {
-    ring.set(model.final.indices);
-    let level = model.final.level;
-    let trend = trendKind === "none" ? 0 : model.final.trend;
-    for (let h = 0; h < horizon; h++) {
-      const pos = h % p;
-      const s = ring[pos];
-      const base = level + ph * trend;
-      const y = base * s * (1 + sigma * draw());
-      const newLevel = alpha * (y / s) + (1 - alpha) * base;
-      const newIndex = gamma * (y / newLevel) + (1 - gamma) * s;
-      if (trendKind !== "none") trend = beta * (newLevel - level) + (1 - beta) * ph * trend;
-      level = newLevel;
-      ring[pos] = Number.isFinite(newIndex) ? newIndex : s;
-      paths[h * PATHS + path] = y;
-    }
-  }
+  // All paths advance one step at a time, drawing step by step, so the interval for a
+  // given step does not depend on how many steps were asked for.
+  const level = new Float64Array(PATHS).fill(model.final.level);
+  const trend = new Float64Array(PATHS).fill(trendKind === "none" ? 0 : model.final.trend);
+  const ring = new Float64Array(PATHS * p);
+  for (let path = 0; path < PATHS; path++) ring.set(model.final.indices, path * p);
+  const step = new Float64Array(PATHS);
   const low = new Float64Array(horizon);
   const high = new Float64Array(horizon);
   const q = (1 - coverage) / 2;
   for (let h = 0; h < horizon; h++) {
-    const slice = paths.subarray(h * PATHS, (h + 1) * PATHS).sort();
-    low[h] = quantileSorted(slice, q);
-    high[h] = quantileSorted(slice, 1 - q);
+    const pos = h % p;
+    for (let path = 0; path < PATHS; path++) {
+      const at = path * p + pos;
+      const s = ring[at];
+      const base = level[path] + ph * trend[path];
+      const y = base * s * (1 + sigma * draw());
+      const newLevel = alpha * (y / s) + (1 - alpha) * base;
+      const newIndex = gamma * (y / newLevel) + (1 - gamma) * s;
+      if (trendKind !== "none") trend[path] = beta * (newLevel - level[path]) + (1 - beta) * ph * trend[path];
+      level[path] = newLevel;
+      ring[at] = Number.isFinite(newIndex) ? newIndex : s;
+      step[path] = y;
+    }
+    step.sort();
+    low[h] = quantileSorted(step, q);
+    high[h] = quantileSorted(step, 1 - q);
     if (!Number.isFinite(low[h]) || !Number.isFinite(high[h])) {
       throw badInput("interval-breakdown", "The simulated interval broke down (the level reached zero); use additive seasonality for this series.");
     }

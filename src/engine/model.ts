@@ -47,7 +47,8 @@ export function fitModel(history: ArrayLike<number | null | undefined>, options:
   const start = options.start ?? "decomposition";
   const cycles = options.cycles ?? 2;
   const seasonalities = seasonalityCandidates(y, p, options.seasonality ?? "multiplicative");
-  const trends: TrendKind[] = (options.trend ?? "linear") === "auto" ? ["linear", "damped", "none"] : [options.trend as TrendKind];
+  const trendChoice = options.trend ?? "linear";
+  const trends: TrendKind[] = trendChoice === "auto" ? ["linear", "damped", "none"] : [trendChoice];
   if (seasonalities.length * trends.length === 1) return fitOne(y, p, seasonalities[0], trends[0], start, cycles, fixed);
   let best: FittedModel | undefined;
   let firstError: unknown;
@@ -104,7 +105,13 @@ export function fitOne(
   if (seasonality === "multiplicative") requirePositive(y);
   const free = freeAxes(seasonality, trend, p, fixed).length;
   const needed = requiredLength(p, seasonality, startMethod, cycles, free);
-  if (y.length < needed) throw notEnough(needed, y.length);
+  if (y.length < needed) {
+    const advice =
+      startMethod === "classic"
+        ? "The classic start uses two full seasons before the first update; add more history."
+        : `${seasonality === "none" ? "The start" : `The start window (${cycles} seasons of ${p})`} comes first${free > 0 ? ", and fitting the constants needs a few periods after it" : ""}; add more history.`;
+    throw notEnough(needed, y.length, "values", advice);
+  }
   let start: Start;
   let constants;
   if (startMethod === "optimized") {

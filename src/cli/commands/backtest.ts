@@ -1,0 +1,78 @@
+import { holdoutScore } from "../../engine";
+import type { BatchCommand, SeriesEntry } from "./batch";
+import { modelSummary } from "./modelSummary";
+
+export interface BacktestFields {
+  holdout: number;
+  forecast: Float64Array;
+  actual: Float64Array;
+  mad: number;
+  mape: number;
+  smape: number;
+  mase: number;
+  rmse: number;
+  bias: number;
+  coverage: number | null;
+}
+
+/**
+ * `backtest`: fit on all but the last --holdout values, forecast them and score the forecasts
+ * (the engine's holdoutScore). The model fields describe the model fitted on the kept part.
+ */
+export const backtestCommand: BatchCommand = {
+  runSeries(column, settings) {
+    const { holdout, coverage, model: options } = settings;
+    const score = holdoutScore(column.values, options, holdout, coverage);
+    const backtest: BacktestFields = {
+      holdout: score.holdout,
+      forecast: score.forecast,
+      actual: score.actual,
+      mad: score.mad,
+      mape: score.mape,
+      smape: score.smape,
+      mase: score.mase,
+      rmse: score.rmse,
+      bias: score.bias,
+      coverage: score.coverage ?? null,
+    };
+    return { ...modelSummary(score.model), backtest };
+  },
+  csvColumns: ["series", "h", "actual", "forecast", "mad", "mape", "smape", "mase", "rmse", "bias", "coverage", "message"],
+  csvRows(entry) {
+    const b = entry.backtest as BacktestFields;
+    return Array.from(b.forecast, (forecast, i) => ({
+      h: i + 1,
+      actual: b.actual[i],
+      forecast,
+      mad: b.mad,
+      mape: b.mape,
+      smape: b.smape,
+      mase: b.mase,
+      rmse: b.rmse,
+      bias: b.bias,
+      coverage: b.coverage,
+    }));
+  },
+  summarize: (entries) => ({ overall: overallScores(entries) }),
+};
+
+/**
+ * Scores over all series: the mean of each scale-free measure over the series where it is
+ * defined (as the M3 competition averaged sMAPE over series). MAD, RMSE and bias are in each
+ * series' own units and are not averaged.
+ */
+function overallScores(entries: SeriesEntry[]): Record<string, number | null> {
+  const scored = entries.filter((e) => e.error === undefined).map((e) => e.backtest as BacktestFields);
+  const mean = (pick: (b: BacktestFields) => number | null): number | null => {
+    const values = scored.map(pick).filter((v): v is number => v !== null && Number.isFinite(v));
+    return values.length === 0 ? null : values.reduce((a, b) => a + b, 0) / values.length;
+  };
+  return {
+    series: scored.length,
+    failed: entries.length - scored.length,
+    mape: mean((b) => b.mape),
+    smape: mean((b) => b.smape),
+    mase: mean((b) => b.mase),
+    coverage: mean((b) => b.coverage),
+  };
+}

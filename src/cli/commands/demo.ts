@@ -1,0 +1,86 @@
+import { EbbError, fitModel, predictionInterval, type FittedModel } from "../../engine";
+import { DEMO_COMPANY, DEMO_CSV_PATH, DEMO_NOTICE } from "../../preview/demo/generate-demo";
+import type { RunSettings } from "../options";
+import { parseSeriesCsv, readInputText } from "../readCsv";
+
+/** DESIGN "Cautions": shown with every demo outlook. */
+export const CAUTION_TEXT =
+  "Caution: forecasts are statistical estimates from past sales; stock-outs, promotions, price changes and one-off " +
+  "events in the history distort them; review forecasts and intervals before committing orders, stock or budgets, " +
+  "and follow your organisation's planning and approval rules.";
+
+/**
+ * `demo` (what `npm start` runs until the preview exists): the `ahead` command with intervals on
+ * the invented Larkmere demo data, printed as a readable table per product.
+ */
+export function runDemo(settings: RunSettings): number {
+  const { columns, labels } = parseSeriesCsv(readInputText(DEMO_CSV_PATH), DEMO_CSV_PATH);
+  const coverage = settings.coverage as number;
+  const lastLabel = labels?.values[labels.values.length - 1];
+  const out: string[] = [];
+  out.push(`Ebb demo: ${DEMO_COMPANY}, next ${settings.horizon} months with ${percent(coverage)} prediction intervals`);
+  out.push(DEMO_NOTICE, "");
+  for (const column of columns) {
+    let model: FittedModel;
+    try {
+      model = fitModel(column.values, settings.model);
+      const band = predictionInterval(model, settings.horizon, coverage);
+      out.push(column.name);
+      out.push(`  ${describe(model)}`);
+      out.push(table(["month", "forecast", "low", "high"], Array.from(band.forecast, (f, i) => [nextLabel(lastLabel, i + 1), whole(f), whole(band.low[i]), whole(band.high[i])])));
+    } catch (e) {
+      if (!(e instanceof EbbError)) throw e;
+      out.push(column.name, `  not forecast: ${e.message}`);
+    }
+    out.push("");
+  }
+  out.push(wrap(CAUTION_TEXT, 96));
+  out.push("", `The same run as JSON: npm run --silent ebb -- ahead src/preview/demo/larkmere-demo.csv --horizon ${settings.horizon} --coverage ${coverage} --seasonality auto --trend auto`);
+  process.stdout.write(out.join("\n") + "\n");
+  return 0;
+}
+
+function describe(m: FittedModel): string {
+  const { spec, constants: c } = m;
+  const parts = [`season length ${spec.period}`, `${spec.seasonality === "none" ? "no" : spec.seasonality} seasonality`, `${spec.trend === "none" ? "no" : spec.trend} trend`];
+  const constants = [`alpha ${c.alpha.toFixed(3)}`];
+  if (spec.trend !== "none") constants.push(`beta ${c.beta.toFixed(3)}`);
+  if (spec.seasonality !== "none") constants.push(`gamma ${c.gamma.toFixed(3)}`);
+  if (spec.trend === "damped") constants.push(`phi ${c.phi.toFixed(3)}`);
+  return `${parts.join(", ")}; ${constants.join(", ")}; one-step RMSE ${m.rmse.toFixed(1)}`;
+}
+
+/** "2025-12" + 1 -> "2026-01"; any other label style: "t+h". */
+function nextLabel(last: string | undefined, h: number): string {
+  const m = last === undefined ? null : /^(\d{4})-(\d{2})$/.exec(last);
+  if (!m) return `t+${h}`;
+  const months = Number(m[1]) * 12 + Number(m[2]) - 1 + h;
+  return `${Math.floor(months / 12)}-${String((months % 12) + 1).padStart(2, "0")}`;
+}
+
+function whole(v: number): string {
+  return Math.round(v).toLocaleString("en-US");
+}
+
+function percent(c: number): string {
+  return `${Number((c * 100).toFixed(1))}%`;
+}
+
+function table(header: string[], rows: string[][]): string {
+  const widths = header.map((h, c) => Math.max(h.length, ...rows.map((r) => r[c].length)));
+  const line = (cells: string[]) => "  " + cells.map((s, c) => (c === 0 ? s.padEnd(widths[c]) : s.padStart(widths[c]))).join("   ");
+  return [line(header), ...rows.map(line)].join("\n");
+}
+
+function wrap(text: string, width: number): string {
+  const lines: string[] = [];
+  let line = "";
+  for (const word of text.split(" ")) {
+    if (line && line.length + 1 + word.length > width) {
+      lines.push(line);
+      line = word;
+    } else line = line ? `${line} ${word}` : word;
+  }
+  if (line) lines.push(line);
+  return lines.join("\n");
+}
