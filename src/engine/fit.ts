@@ -127,10 +127,16 @@ export function minimiseWithGradient(
   const known = (x: Float64Array, f: number): boolean =>
     found.some((m) => f >= m.fx && axes.every((a, i) => Math.abs(x[i] - m.x[i]) <= 0.01 * (a.upper - a.lower)));
   for (const x0 of starts) found.push(projectedBfgs(withGradient, x0, { lower, upper, maxIter: 200, fTol: 1e-12, abandon: known }));
-  const best = found.reduce((a, b) => (b.fx < a.fx ? b : a));
-  // A fresh descent from the best point (new curvature estimate) finishes a stalled one.
-  const polished = projectedBfgs(withGradient, best.x, { lower, upper, maxIter: 200, fTol: 1e-13 });
-  return polished.fx < best.fx ? polished : best;
+  let best = found.reduce((a, b) => (b.fx < a.fx ? b : a));
+  // Fresh descents from the best point (new curvature estimates) finish a stalled one in a
+  // long, narrow valley; they stop as soon as one no longer helps.
+  for (let k = 0; k < 4; k++) {
+    const polished = projectedBfgs(withGradient, best.x, { lower, upper, maxIter: 200, fTol: 1e-13 });
+    const gain = (best.fx - polished.fx) / Math.max(Math.abs(best.fx), 1e-300);
+    if (polished.fx < best.fx) best = polished;
+    if (!(gain > 1e-12)) break;
+  }
+  return best;
 }
 
 /** Grid points, besides the usual start, from which a descent is run. */

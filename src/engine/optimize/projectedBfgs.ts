@@ -14,6 +14,12 @@ export interface ProjectedBfgsOptions {
   maxIter: number;
   /** Stop when two successive steps each lower f by less than this relative amount. */
   fTol: number;
+  /**
+   * Start of the inverse Hessian: "uniform" moves along the raw projected gradient (the
+   * steepest-descent direction of the first step, as classic bounded quasi-Newton codes do);
+   * "diagonal" scales each variable by its own range and gradient.
+   */
+  scaling?: "uniform" | "diagonal";
   /** Optional early stop, asked after every accepted step (e.g. "this basin is known"). */
   abandon?: (x: Float64Array, f: number) => boolean;
 }
@@ -31,13 +37,20 @@ export function projectedBfgs(
   let evals = 1;
   if (!Number.isFinite(f)) return { x, fx: Infinity, evals };
   const H = new Float64Array(d * d);
-  const resetH = (scale: number): void => {
+  // Start of the inverse Hessian. Only the variables not held at a bound set the scale, so a
+  // steep but held coordinate cannot make the steps of the others vanish.
+  const resetH = (): void => {
     H.fill(0);
-    for (let i = 0; i < d; i++) H[i * d + i] = scale;
+    let gmax = 0;
+    for (let i = 0; i < d; i++) if (!isHeld(i)) gmax = Math.max(gmax, Math.abs(g[i]));
+    for (let i = 0; i < d; i++) {
+      const width = Number.isFinite(o.upper[i] - o.lower[i]) ? o.upper[i] - o.lower[i] : Math.max(1, Math.abs(x[i]));
+      H[i * d + i] =
+        o.scaling === "diagonal" ? (0.1 * width) / Math.max(Math.abs(g[i]), 1e-300) : gmax > 0 ? 0.1 / gmax : 1;
+    }
   };
-  let gmax = 0;
-  for (let i = 0; i < d; i++) gmax = Math.max(gmax, Math.abs(g[i]));
-  resetH(gmax > 0 ? 0.1 / gmax : 1);
+  const isHeld = (i: number): boolean => (x[i] <= o.lower[i] && g[i] > 0) || (x[i] >= o.upper[i] && g[i] < 0);
+  resetH();
   const dir = new Float64Array(d);
   const xn = new Float64Array(d);
   const gn = new Float64Array(d);
@@ -46,10 +59,11 @@ export function projectedBfgs(
   const Hy = new Float64Array(d);
   const free = new Array<boolean>(d);
   let slow = 0;
+  let freshRetry = false;
   for (let iter = 0; iter < o.maxIter; iter++) {
     let anyFree = false;
     for (let i = 0; i < d; i++) {
-      free[i] = !((x[i] <= o.lower[i] && g[i] > 0) || (x[i] >= o.upper[i] && g[i] < 0));
+      free[i] = !isHeld(i);
       anyFree ||= free[i] && g[i] !== 0;
     }
     if (!anyFree) break;
@@ -61,8 +75,8 @@ export function projectedBfgs(
       slope += v * g[i];
     }
     if (!(slope < 0)) {
-      // not a descent direction: fall back to steepest descent on the free variables
-      resetH(gmax > 0 ? 0.1 / gmax : 1);
+      // not a descent direction: fall back to scaled steepest descent on the free variables
+      resetH();
       slope = 0;
       for (let i = 0; i < d; i++) {
         dir[i] = free[i] ? -H[i * d + i] * g[i] : 0;
@@ -111,10 +125,17 @@ export function projectedBfgs(
     x.set(xn);
     g.set(gn);
     f = fn;
-    gmax = 0;
-    for (let i = 0; i < d; i++) gmax = Math.max(gmax, Math.abs(g[i]));
     slow = relative < o.fTol ? slow + 1 : 0;
-    if (slow >= 2) break;
+    if (slow >= 2) {
+      // Before stopping, retry once with a fresh scaled start: progress may only have been
+      // slow because the curvature estimate had gone stale.
+      if (freshRetry) break;
+      freshRetry = true;
+      slow = 0;
+      resetH();
+      continue;
+    }
+    if (relative >= o.fTol) freshRetry = false;
     if (o.abandon && o.abandon(x, f)) break;
   }
   return { x, fx: f, evals };
