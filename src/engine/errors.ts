@@ -23,5 +23,6 @@ export function badInput(code: string, message: string): EbbError {
 
 /** #N/A-class error: more history is needed (the normal state of a rolling table's first rows). */
 export function notEnough(needed: number, has: number, what = "values", advice = "Add more history."): EbbError {
-  return new EbbError("na", "not-enough-history", `Needs ${needed} ${what}, has ${has}. ${advice}`);
+  const noun = needed === 1 && what === "values" ? "value" : what;
+  return new EbbError("na", "not-enough-history", `Needs ${needed} ${noun}, has ${has}. ${advice}`);
 }

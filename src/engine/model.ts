@@ -1,7 +1,7 @@
 import { aicc } from "./aicc";
 import { badInput, notEnough } from "./errors";
 import { fitConstants, freeAxes, type ConstantChoice } from "./fit";
-import { checkConstant, checkPeriod, type SeasonalityChoice, type TrendChoice } from "./options";
+import { checkConstant, checkPeriod, parseSeasonality, parseStart, parseTrend, type SeasonalityChoice, type TrendChoice } from "./options";
 import { detectPeriod } from "./period";
 import { projectState, runRecursion } from "./recursion";
 import { allPositive, cleanHistory, countPresent, requirePositive } from "./series";
@@ -44,10 +44,13 @@ export function fitModel(history: ArrayLike<number | null | undefined>, options:
     gamma: checkConstant("gamma", options.gamma),
     phi: checkConstant("phi", options.phi),
   };
-  const start = options.start ?? "decomposition";
+  // Option words are checked here too, so a caller that passes a typed word gets the same
+  // answer as one that parsed it first.
+  const start = parseStart(options.start);
   const cycles = options.cycles ?? 2;
-  const seasonalities = seasonalityCandidates(y, p, options.seasonality ?? "multiplicative");
-  const trendChoice = options.trend ?? "linear";
+  const seasonalities =
+    options.seasonality === "none" ? (["none"] as Seasonality[]) : seasonalityCandidates(y, p, parseSeasonality(options.seasonality));
+  const trendChoice = parseTrend(options.trend);
   const trends: TrendKind[] = trendChoice === "auto" ? ["linear", "damped", "none"] : [trendChoice];
   if (seasonalities.length * trends.length === 1) return fitOne(y, p, seasonalities[0], trends[0], start, cycles, fixed);
   let best: FittedModel | undefined;

@@ -39,9 +39,8 @@ interface SmCase {
   id: string;
   series: string;
   n: number;
-  // The generator writes the key "trend" twice in one dict literal (the trend form "add"/null,
-  // then the results array), so the file holds only the array: null exactly when the model has
-  // no trend. The form is read from the array and cross-checked against the case id.
+  /** statsmodels' trend argument: "add" or null (no trend). */
+  trendForm: "add" | null;
   dampedTrend: boolean;
   seasonal: "add" | "mul" | null;
   seasonalPeriods: number | null;
@@ -63,7 +62,7 @@ const TOLERANCE = 1e-9;
 
 function ebbForm(c: SmCase): { seasonality: Seasonality; trend: TrendKind; p: number; phi: number } {
   const seasonality: Seasonality = c.seasonal === "add" ? "additive" : c.seasonal === "mul" ? "multiplicative" : "none";
-  const trend: TrendKind = c.trend === null ? "none" : c.dampedTrend ? "damped" : "linear";
+  const trend: TrendKind = c.trendForm === null ? "none" : c.dampedTrend ? "damped" : "linear";
   const tag = { none: "trend-none", linear: "trend-add", damped: "trend-add-damped" }[trend];
   if (!c.id.split("/").includes(tag)) throw new Error(`case ${c.id}: trend form ${trend} does not match its id`);
   return { seasonality, trend, p: c.seasonalPeriods ?? 1, phi: c.dampedTrend ? c.constants.damping_trend! : 1 };

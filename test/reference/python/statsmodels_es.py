@@ -237,7 +237,7 @@ def run_case(name, series, trend, damped, seasonal):
         "id": case_id,
         "series": name,
         "n": int(len(y)),
-        "trend": trend,
+        "trendForm": trend,
         "dampedTrend": bool(damped),
         "seasonal": seasonal,
         "seasonalPeriods": m if seasonal else None,
