@@ -1,0 +1,324 @@
+/**
+ * The one table of Ebb's worksheet functions: name, description, parameters with their help,
+ * the shape of the result, and the shared implementation. Every host reads this table: the
+ * spreadsheet host's JSDoc wrappers are generated from it (generateHostFunctions.ts), and the
+ * embedded formula engine's plugin registers from it. Adding a function touches this file
+ * (plus its implementation) and a re-run of the generator.
+ */
+import { accuracyFn, biasFn, madFn, mapeFn, maseFn, mseFn, rmseFn, smapeFn, theilUFn, trackingFn } from "./accuracy";
+import type { Output } from "./cells";
+import { aheadFn, backtestFn, bandFn, fitFn, fittedFn, statesFn } from "./model";
+import { indicesFn, initFn, periodFn } from "./start";
+import { projectFn, stepFn } from "./state";
+
+/** Worksheet namespace: the manifest declares it, so AHEAD is typed EBB.AHEAD. */
+export const NAMESPACE = "EBB";
+
+/**
+ * How a parameter reaches the function: a range of cells, a number, an option word, or any
+ * single value (used where a blank cell must mean "omitted" and text must get Ebb's message).
+ */
+export type ParamKind = "range" | "number" | "word" | "value";
+
+export interface ParamSpec {
+  name: string;
+  help: string;
+  kind: ParamKind;
+  optional?: boolean;
+}
+
+/** Size of one argument as written in a formula, for hosts that reserve a spill area on entry. */
+export interface ArgShape {
+  rows: number;
+  cols: number;
+  /** The number itself when the argument is typed as a plain number. */
+  literal?: number;
+  /** True when the argument is left out or empty. */
+  omitted: boolean;
+}
+
+/** Rows and columns of a spilled result, or undefined when they depend on a value not typed in the formula. */
+export type SizeRule = (args: ArgShape[]) => { rows: number; cols: number } | undefined;
+
+export interface FunctionSpec {
+  /** Name inside the namespace: "AHEAD" is typed EBB.AHEAD. */
+  name: string;
+  description: string;
+  params: ParamSpec[];
+  /** "scalar": one number; "matrix": a block that spills. */
+  result: "scalar" | "matrix";
+  /** Largest block the function can return for these arguments (matrix results only). */
+  size?: SizeRule;
+  /** The shared implementation; throws EbbError for bad input. */
+  run: (...args: unknown[]) => Output;
+}
+
+// ---- sizes of spilled results -------------------------------------------------------------
+
+const NONE: ArgShape = { rows: 1, cols: 1, omitted: true };
+const arg = (a: ArgShape[], i: number): ArgShape => a[i] ?? NONE;
+/** Series in a range: a single row is one series, otherwise one per column. */
+const seriesCount = (a: ArgShape): number => (a.rows === 1 && a.cols > 1 ? 1 : a.cols);
+/** Cells per series. */
+const seriesLength = (a: ArgShape): number => (a.rows === 1 ? a.cols : a.rows);
+const typedWhole = (a: ArgShape): number | undefined =>
+  a.literal !== undefined && Number.isInteger(a.literal) && a.literal >= 1 ? a.literal : undefined;
+
+/**
+ * Rows needed for p seasonal indices: the typed p; when p is detected, at most a third of the
+ * history (a season must repeat three times to be found); when p comes from a cell, at most
+ * half of it (two full seasons are needed).
+ */
+function indexRows(history: ArgShape, period: ArgShape): number {
+  const n = seriesLength(history);
+  if (period.omitted || period.literal === 0) return Math.max(1, Math.floor(n / 3));
+  return typedWhole(period) ?? Math.max(1, Math.floor(n / 2));
+}
+
+function horizonRows(horizon: ArgShape): number | undefined {
+  const h = typedWhole(horizon);
+  return h !== undefined && h <= 1000 ? h : undefined;
+}
+
+const perSeries = (rows: (a: ArgShape[]) => number | undefined, width: number): SizeRule => (a) => {
+  const r = rows(a);
+  return r === undefined ? undefined : { rows: r, cols: width * seriesCount(arg(a, 0)) };
+};
+
+// ---- parameter help shared by several functions ------------------------------------------
+
+const HISTORY: ParamSpec = {
+  name: "history",
+  kind: "range",
+  help: "Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.",
+};
+const PERIOD: ParamSpec = {
+  name: "period",
+  kind: "value",
+  help: "Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.",
+};
+const HORIZON: ParamSpec = { name: "horizon", kind: "number", help: "How many periods ahead to forecast (1 to 1000)." };
+const SEASONALITY: ParamSpec = {
+  name: "seasonality",
+  kind: "word",
+  optional: true,
+  help: "multiplicative (default), additive, or auto (the better of the two by AICc).",
+};
+const FIXED_SEASONALITY: ParamSpec = { ...SEASONALITY, help: "multiplicative (default) or additive." };
+const TREND: ParamSpec = {
+  name: "trend",
+  kind: "word",
+  optional: true,
+  help: "linear (default), damped, none, or auto (the best by AICc).",
+};
+const START: ParamSpec = {
+  name: "start",
+  kind: "word",
+  optional: true,
+  help: "How the start state is found: decomposition (default), classic, or optimized.",
+};
+const constant = (name: string, what: string): ParamSpec => ({
+  name,
+  kind: "value",
+  optional: true,
+  help: `Smoothing constant for the ${what}, 0 to 1; blank fits it.`,
+});
+const ALPHA = constant("alpha", "level");
+const BETA = constant("beta", "trend");
+const GAMMA = constant("gamma", "seasonal indices");
+const PHI: ParamSpec = {
+  name: "phi",
+  kind: "value",
+  optional: true,
+  help: "Trend damping, 0 to 1 (typing it asks for a damped trend); blank fits it when the trend is damped.",
+};
+const ACTUAL: ParamSpec = { name: "actual", kind: "range", help: "Actuals, oldest first (a column or a row). Blank cells are skipped." };
+const FORECAST: ParamSpec = {
+  name: "forecast",
+  kind: "range",
+  help: "Forecasts for the same periods, the same size as actual. Blank cells are skipped.",
+};
+
+const measure = (name: string, description: string, run: (a: unknown, f: unknown) => number): FunctionSpec => ({
+  name,
+  description,
+  params: [ACTUAL, FORECAST],
+  result: "scalar",
+  run: run as FunctionSpec["run"],
+});
+
+// ---- the table ---------------------------------------------------------------------------
+
+export const CATALOG: FunctionSpec[] = [
+  {
+    name: "PERIOD",
+    description: "Detected season length of each series (1 when no season is found).",
+    params: [HISTORY],
+    result: "matrix",
+    size: perSeries(() => 1, 1),
+    run: periodFn as FunctionSpec["run"],
+  },
+  {
+    name: "INDICES",
+    description: "Seasonal indices by classical decomposition over all full seasons; the first index belongs to the first row of the history.",
+    params: [HISTORY, PERIOD, FIXED_SEASONALITY],
+    result: "matrix",
+    size: perSeries((a) => indexRows(arg(a, 0), arg(a, 1)), 1),
+    run: indicesFn as FunctionSpec["run"],
+  },
+  {
+    name: "INIT",
+    description: "Start state from the first seasons: start level, start trend, then the p start indices.",
+    params: [
+      HISTORY,
+      PERIOD,
+      FIXED_SEASONALITY,
+      { name: "cycles", kind: "value", optional: true, help: "Seasons in the start window, 2 or more (default 2)." },
+    ],
+    result: "matrix",
+    size: perSeries((a) => 2 + indexRows(arg(a, 0), arg(a, 1)), 1),
+    run: initFn as FunctionSpec["run"],
+  },
+  {
+    name: "STEP",
+    description: "One Holt-Winters update: new level, new trend, new index, the forecast made for this period, and its error.",
+    params: [
+      { name: "level", kind: "value", help: "Level after the period before (or the start level)." },
+      { name: "trend", kind: "value", help: "Trend after the period before (or the start trend; 0 for none)." },
+      { name: "index", kind: "value", help: "Seasonal index of the same season, one season back." },
+      { name: "actual", kind: "value", help: "This period's actual; blank skips the update." },
+      { ...ALPHA, optional: false, help: "Smoothing constant for the level, 0 to 1." },
+      { ...BETA, optional: false, help: "Smoothing constant for the trend, 0 to 1." },
+      { ...GAMMA, optional: false, help: "Smoothing constant for the seasonal indices, 0 to 1." },
+      FIXED_SEASONALITY,
+      { ...PHI, help: "Trend damping, 0 to 1 (default 1, no damping)." },
+    ],
+    result: "matrix",
+    size: () => ({ rows: 1, cols: 5 }),
+    run: stepFn as FunctionSpec["run"],
+  },
+  {
+    name: "PROJECT",
+    description: "Forecasts for the next periods from a state: level, trend and the last p seasonal indices.",
+    params: [
+      { name: "level", kind: "value", help: "Level at the last period." },
+      { name: "trend", kind: "value", help: "Trend at the last period (0 for none)." },
+      { name: "indices", kind: "range", help: "The last p seasonal indices, oldest first." },
+      HORIZON,
+      FIXED_SEASONALITY,
+      { ...PHI, help: "Trend damping, 0 to 1 (default 1, no damping)." },
+    ],
+    result: "matrix",
+    size: (a) => {
+      const h = horizonRows(arg(a, 3));
+      return h === undefined ? undefined : { rows: h, cols: 1 };
+    },
+    run: projectFn as FunctionSpec["run"],
+  },
+  {
+    name: "FIT",
+    description:
+      "Fitted model of each series: seasonality and trend used, alpha, beta, gamma, phi, sum of squared errors, RMSE and AICc (one column per series).",
+    params: [HISTORY, PERIOD, SEASONALITY, TREND, START],
+    result: "matrix",
+    size: perSeries(() => 9, 1),
+    run: fitFn as FunctionSpec["run"],
+  },
+  {
+    name: "STATES",
+    description:
+      "Level, trend, seasonal index, one-step forecast and error for every period (five columns per series; blank in the start window).",
+    params: [HISTORY, PERIOD, ALPHA, BETA, GAMMA, SEASONALITY, TREND, PHI, START],
+    result: "matrix",
+    size: perSeries((a) => seriesLength(arg(a, 0)), 5),
+    run: statesFn as FunctionSpec["run"],
+  },
+  {
+    name: "FITTED",
+    description: "One-step forecasts aligned with the history (blank in the start window), one column per series.",
+    params: [HISTORY, PERIOD, ALPHA, BETA, GAMMA, SEASONALITY, TREND, PHI, START],
+    result: "matrix",
+    size: perSeries((a) => seriesLength(arg(a, 0)), 1),
+    run: fittedFn as FunctionSpec["run"],
+  },
+  {
+    name: "AHEAD",
+    description: "Forecasts for the next periods after the history, one column per series.",
+    params: [HISTORY, PERIOD, HORIZON, SEASONALITY, TREND, ALPHA, BETA, GAMMA, PHI],
+    result: "matrix",
+    size: perSeries((a) => horizonRows(arg(a, 2)), 1),
+    run: aheadFn as FunctionSpec["run"],
+  },
+  {
+    name: "BAND",
+    description: "Prediction interval for the next periods: low and high, two columns per series.",
+    params: [
+      HISTORY,
+      PERIOD,
+      HORIZON,
+      { name: "coverage", kind: "value", optional: true, help: "Share of future actuals the interval should hold, for example 0.95 (default)." },
+      SEASONALITY,
+      TREND,
+    ],
+    result: "matrix",
+    size: perSeries((a) => horizonRows(arg(a, 2)), 2),
+    run: bandFn as FunctionSpec["run"],
+  },
+  {
+    name: "BACKTEST",
+    description: "Rolling-origin test: per step ahead, MAD, MAPE, MASE and the number of origins scored (four columns per series).",
+    params: [
+      HISTORY,
+      PERIOD,
+      HORIZON,
+      { name: "origins", kind: "value", optional: true, help: "How many forecast origins to refit from, ending horizon periods before the last actual (default 12)." },
+      SEASONALITY,
+      TREND,
+    ],
+    result: "matrix",
+    size: perSeries((a) => horizonRows(arg(a, 2)), 4),
+    run: backtestFn as FunctionSpec["run"],
+  },
+  measure("MAD", "Mean absolute deviation of the forecast errors (error = actual - forecast).", madFn),
+  measure("MSE", "Mean squared forecast error.", mseFn),
+  measure("RMSE", "Root mean squared forecast error.", rmseFn),
+  measure("MAPE", "Mean absolute percentage error, in percent.", mapeFn),
+  measure("SMAPE", "Symmetric mean absolute percentage error (M3 competition form), in percent.", smapeFn),
+  measure("BIAS", "Mean forecast error (actual - forecast); positive means forecasts ran low.", biasFn),
+  measure("THEILU", "Theil's U2: below 1 the forecasts beat the no-change forecast.", theilUFn),
+  {
+    name: "MASE",
+    description: "Mean absolute scaled error: MAD divided by the in-sample MAD of the seasonal naive forecast on the history.",
+    params: [ACTUAL, FORECAST, { ...HISTORY, help: "In-sample history the forecasts were made from, oldest first." }, PERIOD],
+    result: "scalar",
+    run: maseFn as FunctionSpec["run"],
+  },
+  {
+    name: "TRACKING",
+    description: "Running tracking signal (running sum of errors over running MAD); beyond +/-4 suggests a biased forecast.",
+    params: [ACTUAL, FORECAST],
+    result: "matrix",
+    size: (a) => ({ rows: arg(a, 0).rows * arg(a, 0).cols, cols: 1 }),
+    run: trackingFn as FunctionSpec["run"],
+  },
+  {
+    name: "ACCURACY",
+    description: "Table of accuracy measures: measure name and value (MASE too when a history is given).",
+    params: [
+      ACTUAL,
+      FORECAST,
+      { ...HISTORY, optional: true, help: "Optional in-sample history, for MASE." },
+      { ...PERIOD, optional: true, help: "Season length for MASE; 0 or blank detects it." },
+    ],
+    result: "matrix",
+    size: (a) => ({ rows: arg(a, 2).omitted ? 8 : 9, cols: 2 }),
+    run: accuracyFn as FunctionSpec["run"],
+  },
+];
+
+/** A function's spec by its name inside the namespace. */
+export function specOf(name: string): FunctionSpec {
+  const spec = CATALOG.find((f) => f.name === name);
+  if (!spec) throw new Error(`No EBB function is named ${name}.`);
+  return spec;
+}

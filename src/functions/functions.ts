@@ -1,0 +1,267 @@
+/*
+ * Ebb's worksheet functions for the spreadsheet host (namespace EBB, set in the manifest).
+ * Generated from catalog.ts by generateHostFunctions.ts: edit the catalog, not this file.
+ * custom-functions-metadata-plugin reads the JSDoc below to write functions.json and adds the
+ * CustomFunctions.associate calls when webpack bundles this file.
+ */
+/* eslint-disable @typescript-eslint/no-explicit-any */
+import { callHost } from "./host";
+
+/**
+ * Detected season length of each series (1 when no season is found).
+ * @customfunction PERIOD
+ * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
+ */
+export function period(history: any[][]): any[][] {
+  return callHost("PERIOD", [history]);
+}
+
+/**
+ * Seasonal indices by classical decomposition over all full seasons; the first index belongs to the first row of the history.
+ * @customfunction INDICES
+ * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
+ * @param period Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.
+ * @param seasonality multiplicative (default) or additive.
+ */
+export function indices(history: any[][], period: any, seasonality?: string): any[][] {
+  return callHost("INDICES", [history, period, seasonality]);
+}
+
+/**
+ * Start state from the first seasons: start level, start trend, then the p start indices.
+ * @customfunction INIT
+ * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
+ * @param period Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.
+ * @param seasonality multiplicative (default) or additive.
+ * @param cycles Seasons in the start window, 2 or more (default 2).
+ */
+export function init(history: any[][], period: any, seasonality?: string, cycles?: any): any[][] {
+  return callHost("INIT", [history, period, seasonality, cycles]);
+}
+
+/**
+ * One Holt-Winters update: new level, new trend, new index, the forecast made for this period, and its error.
+ * @customfunction STEP
+ * @param level Level after the period before (or the start level).
+ * @param trend Trend after the period before (or the start trend; 0 for none).
+ * @param index Seasonal index of the same season, one season back.
+ * @param actual This period's actual; blank skips the update.
+ * @param alpha Smoothing constant for the level, 0 to 1.
+ * @param beta Smoothing constant for the trend, 0 to 1.
+ * @param gamma Smoothing constant for the seasonal indices, 0 to 1.
+ * @param seasonality multiplicative (default) or additive.
+ * @param phi Trend damping, 0 to 1 (default 1, no damping).
+ */
+export function step(level: any, trend: any, index: any, actual: any, alpha: any, beta: any, gamma: any, seasonality?: string, phi?: any): any[][] {
+  return callHost("STEP", [level, trend, index, actual, alpha, beta, gamma, seasonality, phi]);
+}
+
+/**
+ * Forecasts for the next periods from a state: level, trend and the last p seasonal indices.
+ * @customfunction PROJECT
+ * @param level Level at the last period.
+ * @param trend Trend at the last period (0 for none).
+ * @param indices The last p seasonal indices, oldest first.
+ * @param horizon How many periods ahead to forecast (1 to 1000).
+ * @param seasonality multiplicative (default) or additive.
+ * @param phi Trend damping, 0 to 1 (default 1, no damping).
+ */
+export function project(level: any, trend: any, indices: any[][], horizon: number, seasonality?: string, phi?: any): any[][] {
+  return callHost("PROJECT", [level, trend, indices, horizon, seasonality, phi]);
+}
+
+/**
+ * Fitted model of each series: seasonality and trend used, alpha, beta, gamma, phi, sum of squared errors, RMSE and AICc (one column per series).
+ * @customfunction FIT
+ * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
+ * @param period Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.
+ * @param seasonality multiplicative (default), additive, or auto (the better of the two by AICc).
+ * @param trend linear (default), damped, none, or auto (the best by AICc).
+ * @param start How the start state is found: decomposition (default), classic, or optimized.
+ */
+export function fit(history: any[][], period: any, seasonality?: string, trend?: string, start?: string): any[][] {
+  return callHost("FIT", [history, period, seasonality, trend, start]);
+}
+
+/**
+ * Level, trend, seasonal index, one-step forecast and error for every period (five columns per series; blank in the start window).
+ * @customfunction STATES
+ * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
+ * @param period Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.
+ * @param alpha Smoothing constant for the level, 0 to 1; blank fits it.
+ * @param beta Smoothing constant for the trend, 0 to 1; blank fits it.
+ * @param gamma Smoothing constant for the seasonal indices, 0 to 1; blank fits it.
+ * @param seasonality multiplicative (default), additive, or auto (the better of the two by AICc).
+ * @param trend linear (default), damped, none, or auto (the best by AICc).
+ * @param phi Trend damping, 0 to 1 (typing it asks for a damped trend); blank fits it when the trend is damped.
+ * @param start How the start state is found: decomposition (default), classic, or optimized.
+ */
+export function states(history: any[][], period: any, alpha?: any, beta?: any, gamma?: any, seasonality?: string, trend?: string, phi?: any, start?: string): any[][] {
+  return callHost("STATES", [history, period, alpha, beta, gamma, seasonality, trend, phi, start]);
+}
+
+/**
+ * One-step forecasts aligned with the history (blank in the start window), one column per series.
+ * @customfunction FITTED
+ * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
+ * @param period Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.
+ * @param alpha Smoothing constant for the level, 0 to 1; blank fits it.
+ * @param beta Smoothing constant for the trend, 0 to 1; blank fits it.
+ * @param gamma Smoothing constant for the seasonal indices, 0 to 1; blank fits it.
+ * @param seasonality multiplicative (default), additive, or auto (the better of the two by AICc).
+ * @param trend linear (default), damped, none, or auto (the best by AICc).
+ * @param phi Trend damping, 0 to 1 (typing it asks for a damped trend); blank fits it when the trend is damped.
+ * @param start How the start state is found: decomposition (default), classic, or optimized.
+ */
+export function fitted(history: any[][], period: any, alpha?: any, beta?: any, gamma?: any, seasonality?: string, trend?: string, phi?: any, start?: string): any[][] {
+  return callHost("FITTED", [history, period, alpha, beta, gamma, seasonality, trend, phi, start]);
+}
+
+/**
+ * Forecasts for the next periods after the history, one column per series.
+ * @customfunction AHEAD
+ * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
+ * @param period Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.
+ * @param horizon How many periods ahead to forecast (1 to 1000).
+ * @param seasonality multiplicative (default), additive, or auto (the better of the two by AICc).
+ * @param trend linear (default), damped, none, or auto (the best by AICc).
+ * @param alpha Smoothing constant for the level, 0 to 1; blank fits it.
+ * @param beta Smoothing constant for the trend, 0 to 1; blank fits it.
+ * @param gamma Smoothing constant for the seasonal indices, 0 to 1; blank fits it.
+ * @param phi Trend damping, 0 to 1 (typing it asks for a damped trend); blank fits it when the trend is damped.
+ */
+export function ahead(history: any[][], period: any, horizon: number, seasonality?: string, trend?: string, alpha?: any, beta?: any, gamma?: any, phi?: any): any[][] {
+  return callHost("AHEAD", [history, period, horizon, seasonality, trend, alpha, beta, gamma, phi]);
+}
+
+/**
+ * Prediction interval for the next periods: low and high, two columns per series.
+ * @customfunction BAND
+ * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
+ * @param period Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.
+ * @param horizon How many periods ahead to forecast (1 to 1000).
+ * @param coverage Share of future actuals the interval should hold, for example 0.95 (default).
+ * @param seasonality multiplicative (default), additive, or auto (the better of the two by AICc).
+ * @param trend linear (default), damped, none, or auto (the best by AICc).
+ */
+export function band(history: any[][], period: any, horizon: number, coverage?: any, seasonality?: string, trend?: string): any[][] {
+  return callHost("BAND", [history, period, horizon, coverage, seasonality, trend]);
+}
+
+/**
+ * Rolling-origin test: per step ahead, MAD, MAPE, MASE and the number of origins scored (four columns per series).
+ * @customfunction BACKTEST
+ * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
+ * @param period Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.
+ * @param horizon How many periods ahead to forecast (1 to 1000).
+ * @param origins How many forecast origins to refit from, ending horizon periods before the last actual (default 12).
+ * @param seasonality multiplicative (default), additive, or auto (the better of the two by AICc).
+ * @param trend linear (default), damped, none, or auto (the best by AICc).
+ */
+export function backtest(history: any[][], period: any, horizon: number, origins?: any, seasonality?: string, trend?: string): any[][] {
+  return callHost("BACKTEST", [history, period, horizon, origins, seasonality, trend]);
+}
+
+/**
+ * Mean absolute deviation of the forecast errors (error = actual - forecast).
+ * @customfunction MAD
+ * @param actual Actuals, oldest first (a column or a row). Blank cells are skipped.
+ * @param forecast Forecasts for the same periods, the same size as actual. Blank cells are skipped.
+ */
+export function mad(actual: any[][], forecast: any[][]): number {
+  return callHost("MAD", [actual, forecast]);
+}
+
+/**
+ * Mean squared forecast error.
+ * @customfunction MSE
+ * @param actual Actuals, oldest first (a column or a row). Blank cells are skipped.
+ * @param forecast Forecasts for the same periods, the same size as actual. Blank cells are skipped.
+ */
+export function mse(actual: any[][], forecast: any[][]): number {
+  return callHost("MSE", [actual, forecast]);
+}
+
+/**
+ * Root mean squared forecast error.
+ * @customfunction RMSE
+ * @param actual Actuals, oldest first (a column or a row). Blank cells are skipped.
+ * @param forecast Forecasts for the same periods, the same size as actual. Blank cells are skipped.
+ */
+export function rmse(actual: any[][], forecast: any[][]): number {
+  return callHost("RMSE", [actual, forecast]);
+}
+
+/**
+ * Mean absolute percentage error, in percent.
+ * @customfunction MAPE
+ * @param actual Actuals, oldest first (a column or a row). Blank cells are skipped.
+ * @param forecast Forecasts for the same periods, the same size as actual. Blank cells are skipped.
+ */
+export function mape(actual: any[][], forecast: any[][]): number {
+  return callHost("MAPE", [actual, forecast]);
+}
+
+/**
+ * Symmetric mean absolute percentage error (M3 competition form), in percent.
+ * @customfunction SMAPE
+ * @param actual Actuals, oldest first (a column or a row). Blank cells are skipped.
+ * @param forecast Forecasts for the same periods, the same size as actual. Blank cells are skipped.
+ */
+export function smape(actual: any[][], forecast: any[][]): number {
+  return callHost("SMAPE", [actual, forecast]);
+}
+
+/**
+ * Mean forecast error (actual - forecast); positive means forecasts ran low.
+ * @customfunction BIAS
+ * @param actual Actuals, oldest first (a column or a row). Blank cells are skipped.
+ * @param forecast Forecasts for the same periods, the same size as actual. Blank cells are skipped.
+ */
+export function bias(actual: any[][], forecast: any[][]): number {
+  return callHost("BIAS", [actual, forecast]);
+}
+
+/**
+ * Theil's U2: below 1 the forecasts beat the no-change forecast.
+ * @customfunction THEILU
+ * @param actual Actuals, oldest first (a column or a row). Blank cells are skipped.
+ * @param forecast Forecasts for the same periods, the same size as actual. Blank cells are skipped.
+ */
+export function theilu(actual: any[][], forecast: any[][]): number {
+  return callHost("THEILU", [actual, forecast]);
+}
+
+/**
+ * Mean absolute scaled error: MAD divided by the in-sample MAD of the seasonal naive forecast on the history.
+ * @customfunction MASE
+ * @param actual Actuals, oldest first (a column or a row). Blank cells are skipped.
+ * @param forecast Forecasts for the same periods, the same size as actual. Blank cells are skipped.
+ * @param history In-sample history the forecasts were made from, oldest first.
+ * @param period Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.
+ */
+export function mase(actual: any[][], forecast: any[][], history: any[][], period: any): number {
+  return callHost("MASE", [actual, forecast, history, period]);
+}
+
+/**
+ * Running tracking signal (running sum of errors over running MAD); beyond +/-4 suggests a biased forecast.
+ * @customfunction TRACKING
+ * @param actual Actuals, oldest first (a column or a row). Blank cells are skipped.
+ * @param forecast Forecasts for the same periods, the same size as actual. Blank cells are skipped.
+ */
+export function tracking(actual: any[][], forecast: any[][]): any[][] {
+  return callHost("TRACKING", [actual, forecast]);
+}
+
+/**
+ * Table of accuracy measures: measure name and value (MASE too when a history is given).
+ * @customfunction ACCURACY
+ * @param actual Actuals, oldest first (a column or a row). Blank cells are skipped.
+ * @param forecast Forecasts for the same periods, the same size as actual. Blank cells are skipped.
+ * @param history Optional in-sample history, for MASE.
+ * @param period Season length for MASE; 0 or blank detects it.
+ */
+export function accuracy(actual: any[][], forecast: any[][], history?: any[][], period?: any): any[][] {
+  return callHost("ACCURACY", [actual, forecast, history, period]);
+}
