@@ -1,0 +1,119 @@
+import { checkSheetName, parseCell, rangeAddress, sheetReference, absolute } from "./addresses";
+import { chartSpec } from "./chartSection";
+import type { SectionContext } from "./context";
+import { engineFigures } from "./engineFigures";
+import { SUBTITLE, title } from "./labels";
+import { ledgerGeometry, type Shape } from "./layout";
+import { checkTag, defaultTag, ledgerName } from "./names";
+import { outlookSection } from "./outlookSection";
+import { scorecardSection } from "./scorecardSection";
+import { settingsSection } from "./settingsSection";
+import { SheetCells } from "./sheet";
+import { startSection } from "./startSection";
+import type { LedgerDescription, LedgerInput } from "./types";
+import { updatesSection } from "./updatesSection";
+
+/**
+ * Turn a history and its settings into a ledger description: the cells (values, formulas,
+ * formats, notes), defined names, conditional flags, merges and chart of an Ebb ledger.
+ * Pure: no host, no I/O. Throws EbbError with a message that says what to do on bad input.
+ */
+export function describeLedger(input: LedgerInput): LedgerDescription {
+  const sheet = checkSheetName(input.anchor.sheet);
+  const { row: r0, col: c0 } = parseCell(input.anchor.cell);
+  const tag = checkTag(input.tag ?? defaultTag(sheet, input.anchor.cell));
+  const f = engineFigures(input.history, input.settings, input.horizon, input.coverage);
+  const spec = f.model.spec;
+  const shape: Shape = {
+    seasonal: f.seasonal,
+    mult: f.mult,
+    trend: spec.trend,
+    start: spec.start as Shape["start"],
+    p: f.p,
+    window: f.window,
+    horizon: input.horizon,
+    updateRows: f.p + (f.y.length - f.firstUpdate),
+  };
+  const g = ledgerGeometry(r0, c0, shape);
+  const name = (input.name ?? "").trim() || "History";
+  const cells = new SheetCells();
+  const ctx: SectionContext = {
+    f,
+    g,
+    cells,
+    sheet,
+    tag,
+    name,
+    horizon: input.horizon,
+    coverage: input.coverage,
+    names: [],
+    refs: { startIndex: [], startActual: [] },
+  };
+
+  cells.text(r0, c0, title(name), "title");
+  cells.text(r0 + 1, c0, SUBTITLE, "subtitle");
+  ctx.names.push({ name: ledgerName(tag, "ledger"), refersTo: sheetReference(sheet, absolute(r0, c0)), comment: "Top-left cell of an Ebb ledger." });
+  const settings = settingsSection(ctx);
+  startSection(ctx);
+  const { rows, flags } = updatesSection(ctx);
+  const outlookRows = outlookSection(ctx);
+  const scorecard = scorecardSection(ctx);
+  const lastRow = rows[rows.length - 1].row;
+
+  const widths: Record<number, number> = {};
+  for (let c = c0; c < c0 + g.width; c++) widths[c] = 13;
+  widths[c0] = 18;
+  const heights: Record<number, number> = {};
+  for (const c of cells.all()) if (c.role === "header" && String(c.value).length > 12) heights[c.row] = 30;
+  return {
+    sheet,
+    anchor: input.anchor.cell.replace(/\$/g, "").toUpperCase(),
+    tag,
+    spec: {
+      period: f.p,
+      seasonality: spec.seasonality,
+      trend: spec.trend,
+      start: spec.start as "decomposition" | "classic",
+      cycles: f.seasonal ? f.window / f.p : f.window,
+      horizon: input.horizon,
+      coverage: input.coverage,
+    },
+    constants: { ...f.model.constants },
+    history: Array.from(f.y, (v) => (Number.isNaN(v) ? null : v)),
+    name,
+    cells: cells.all(),
+    names: ctx.names,
+    merges: [rangeAddress(r0, c0, r0, c0 + g.width - 1), rangeAddress(r0 + 1, c0, r0 + 1, c0 + g.width - 1)],
+    flags,
+    chart: chartSpec(ctx, lastRow),
+    columnWidths: widths,
+    rowHeights: heights,
+    footprint: [rangeAddress(r0, c0, g.updates.reachLast, c0 + g.width - 1)],
+    layout: {
+      anchorRow: r0,
+      anchorCol: c0,
+      settings: settings.inUse,
+      written: settings.written,
+      scorecard,
+      outlook: { firstRow: g.outlook.first, rows: outlookRows },
+      updates: {
+        headerRow: g.updates.header,
+        firstRow: g.updates.first,
+        firstUpdateRow: g.updates.firstUpdate,
+        lastReachRow: g.updates.reachLast,
+        columns: g.updates.cols,
+        rows,
+      },
+      start: {
+        windowFirstRow: g.start.first,
+        window: f.window,
+        columns: g.start.cols,
+        level: ctx.refs.startLevel!.replace(/\$/g, ""),
+        trend: ctx.refs.startTrend!.replace(/\$/g, ""),
+        indexCells: ctx.refs.startIndex.map((a) => a.replace(/\$/g, "")),
+      },
+      width: g.width,
+    },
+    intervalMethod: f.mult ? "engine-simulation" : "formula",
+  };
+}

@@ -1,0 +1,109 @@
+import {
+  badInput,
+  bias,
+  checkCoverage,
+  checkHorizon,
+  cleanHistory,
+  EbbError,
+  fitModel,
+  forecastModel,
+  mad,
+  mape,
+  modelStates,
+  parseSeasonality,
+  parseStart,
+  parseTrend,
+  predictionInterval,
+  rmse,
+  trackingSignal,
+  type FittedModel,
+  type Interval,
+  type StateTable,
+} from "../../engine";
+import type { LedgerSettings } from "./types";
+
+/** Everything the ledger shows that the engine computes, for one history and its settings. */
+export interface EngineFigures {
+  model: FittedModel;
+  y: Float64Array;
+  /** Season length used by the layout (1 without seasonality). */
+  p: number;
+  seasonal: boolean;
+  mult: boolean;
+  states: StateTable;
+  interval: Interval;
+  forecast: Float64Array;
+  /** 0-based index of the first updated period. */
+  firstUpdate: number;
+  /** Periods in the start table (the start window). */
+  window: number;
+  /** Per update period (index t - firstUpdate): running MAD (null before the first error) and tracking signal. */
+  runningMad: (number | null)[];
+  tracking: Float64Array;
+  score: { mad: number; rmse: number; mape: number | string; bias: number; count: number };
+}
+
+export const MAPE_UNDEFINED = "not defined (an actual is 0)";
+
+/** Fit (or take) the model and gather the engine's figures. Throws EbbError with advice on bad input. */
+export function engineFigures(history: ArrayLike<number | null | undefined>, settings: LedgerSettings, horizon: number, coverage: number): EngineFigures {
+  checkHorizon(horizon);
+  checkCoverage(coverage);
+  const start = parseStart(settings.start);
+  if (start === "optimized") {
+    throw badInput(
+      "ledger-start",
+      "A ledger writes its start as formulas, which the optimized start cannot be. Choose the decomposition or the classic start.",
+    );
+  }
+  const y = cleanHistory(history);
+  const model = fitModel(y, {
+    period: settings.period,
+    seasonality: parseSeasonality(settings.seasonality),
+    trend: parseTrend(settings.trend),
+    start,
+    cycles: settings.cycles,
+    alpha: settings.alpha,
+    beta: settings.beta,
+    gamma: settings.gamma,
+    phi: settings.phi,
+  });
+  const seasonal = model.spec.seasonality !== "none";
+  const p = seasonal ? model.spec.period : 1;
+  const firstUpdate = model.start.firstUpdate;
+  const window = start === "classic" ? (seasonal ? 2 * p : 2) : seasonal ? model.spec.cycles * p : Math.max(2, model.spec.cycles);
+  const states = modelStates(model);
+  const interval = predictionInterval(model, horizon, coverage);
+  const forecast = forecastModel(model, horizon);
+  const actual = y.subarray(firstUpdate);
+  const fc = states.forecast.subarray(firstUpdate);
+  const tracking = trackingSignal(actual, fc);
+  const runningMad: (number | null)[] = [];
+  let seen = 0;
+  for (let i = 0; i < actual.length; i++) {
+    if (!Number.isNaN(actual[i])) seen++;
+    runningMad.push(seen === 0 ? null : mad(actual.subarray(0, i + 1), fc.subarray(0, i + 1)));
+  }
+  let mapeValue: number | string;
+  try {
+    mapeValue = mape(actual, fc);
+  } catch (e) {
+    if (e instanceof EbbError && e.code === "mape-zero-actual") mapeValue = MAPE_UNDEFINED;
+    else throw e;
+  }
+  return {
+    model,
+    y,
+    p,
+    seasonal,
+    mult: model.spec.seasonality === "multiplicative",
+    states,
+    interval,
+    forecast,
+    firstUpdate,
+    window,
+    runningMad,
+    tracking,
+    score: { mad: mad(actual, fc), rmse: rmse(actual, fc), mape: mapeValue, bias: bias(actual, fc), count: model.errorCount },
+  };
+}

@@ -1,0 +1,174 @@
+import { badInput } from "../../engine";
+import { MAX_COLS, MAX_ROWS } from "./addresses";
+import type { SettingKey, StartColumnKey, UpdateColumnKey } from "./types";
+
+/**
+ * Where each part of a ledger goes, relative to its top-left cell. A pure function of the
+ * model's shape, so verify and extend can rebuild it from the settings block alone.
+ *
+ *   title, subtitle
+ *   1 Settings (left)            5 Scorecard (right)
+ *   4 Outlook (basis row, then one row per step)
+ *   2 Start (start table left, index table and line block right)
+ *   3 Updates (grows downward as actuals arrive; the last section, so rows can be added)
+ */
+
+export const SETTING_KEYS: SettingKey[] = [
+  "name",
+  "alpha",
+  "beta",
+  "gamma",
+  "phi",
+  "season",
+  "seasonality",
+  "trend",
+  "start",
+  "cycles",
+  "horizon",
+  "coverage",
+  "tag",
+];
+
+export interface Shape {
+  seasonal: boolean;
+  mult: boolean;
+  trend: "linear" | "damped" | "none";
+  start: "decomposition" | "classic";
+  /** Season length (1 without seasonality). */
+  p: number;
+  /** Periods in the start table. */
+  window: number;
+  horizon: number;
+  /** Rows in the update table, start rows included. */
+  updateRows: number;
+}
+
+export type OutlookColumnKey = "period" | "steps" | "position" | "multiplier" | "index" | "forecast" | "weight" | "sumSquares" | "half" | "gapBelow" | "gapAbove" | "low" | "high";
+
+export interface Geometry {
+  r0: number;
+  c0: number;
+  width: number;
+  settings: { heading: number; header: number; rows: Record<SettingKey, number> };
+  score: { labelCol: number; valueCol: number; header: number; first: number };
+  outlook: { heading: number; basisLabelRow: number; basisValueRow: number; header: number; first: number; cols: Partial<Record<OutlookColumnKey, number>> };
+  start: {
+    heading: number;
+    header: number;
+    first: number;
+    cols: Partial<Record<StartColumnKey, number>>;
+    sideCol: number;
+    indexHeader: number;
+    indexFirst: number;
+    lineFirst: number;
+  };
+  updates: { heading: number; header: number; first: number; firstUpdate: number; cols: Partial<Record<UpdateColumnKey, number>>; reachLast: number };
+  chart: { row: number; col: number; lastRow: number; lastCol: number };
+}
+
+/** Rows the update table's names reach: room to add actuals without touching the rest. */
+export function reachRows(updateRows: number): number {
+  return Math.max(3000, Math.ceil((updateRows * 2) / 1000) * 1000);
+}
+
+function columns<K extends string>(keys: (K | false)[], c0: number): Partial<Record<K, number>> {
+  const out: Partial<Record<K, number>> = {};
+  let c = c0;
+  for (const k of keys) if (k) out[k] = c++;
+  return out;
+}
+
+export function startColumnKeys(s: Shape): StartColumnKey[] {
+  const keys: (StartColumnKey | false)[] = ["period", s.seasonal && "position", "actual"];
+  if (s.seasonal) {
+    keys.push("average", "detrended");
+    if (s.start === "decomposition") keys.push("adjusted", s.trend !== "none" && "lineX");
+    else keys.push("rank");
+  } else if (s.start === "decomposition" && s.trend !== "none") {
+    keys.push("lineX");
+  }
+  keys.push("written");
+  return keys.filter((k): k is StartColumnKey => k !== false);
+}
+
+export function ledgerGeometry(r0: number, c0: number, s: Shape): Geometry {
+  const updateKeys: (UpdateColumnKey | false)[] = [
+    "period",
+    s.seasonal && "position",
+    "actual",
+    "forecast",
+    "error",
+    "absError",
+    "pctError",
+    "level",
+    "trend",
+    s.seasonal && "index",
+    "errorSum",
+    "mad",
+    "tracking",
+    "written",
+  ];
+  const updateCols = columns(updateKeys, c0);
+  const width = Object.keys(updateCols).length;
+
+  const settingsHeading = r0 + 3;
+  const settingRows = {} as Record<SettingKey, number>;
+  SETTING_KEYS.forEach((k, i) => (settingRows[k] = settingsHeading + 2 + i));
+  const settingsLast = settingsHeading + 1 + SETTING_KEYS.length;
+
+  const outlookHeading = settingsLast + 2;
+  const outlookKeys: (OutlookColumnKey | false)[] = [
+    "period",
+    "steps",
+    s.seasonal && "position",
+    "multiplier",
+    s.seasonal && "index",
+    "forecast",
+    !s.mult && "weight",
+    !s.mult && "sumSquares",
+    !s.mult && "half",
+    s.mult && "gapBelow",
+    s.mult && "gapAbove",
+    "low",
+    "high",
+  ];
+  const outlookHeader = outlookHeading + 3;
+  const outlookLast = outlookHeader + s.horizon;
+
+  const startHeading = outlookLast + 2;
+  const startKeys = startColumnKeys(s);
+  const startCols = columns(startKeys, c0);
+  const sideCol = c0 + startKeys.length + 1;
+  const startFirst = startHeading + 2;
+  const indexHeader = startHeading + 1;
+  const indexFirst = startFirst;
+  const lineFirst = s.seasonal ? indexFirst + s.p + 1 : startFirst;
+  const lineRows = 4;
+  const startLast = Math.max(startFirst + s.window - 1, lineFirst + lineRows - 1);
+
+  const updatesHeading = startLast + 2;
+  const updatesHeader = updatesHeading + 1;
+  const updatesFirst = updatesHeader + 1;
+  const reachLast = updatesFirst + reachRows(s.updateRows) - 1;
+  if (reachLast >= MAX_ROWS || c0 + width + 12 >= MAX_COLS) {
+    throw badInput("bad-anchor", "The ledger does not fit below or right of this cell. Choose a cell nearer the top left, or a new sheet.");
+  }
+  return {
+    r0,
+    c0,
+    width,
+    settings: { heading: settingsHeading, header: settingsHeading + 1, rows: settingRows },
+    score: { labelCol: c0 + 8, valueCol: c0 + 10, header: settingsHeading + 1, first: settingsHeading + 2 },
+    outlook: {
+      heading: outlookHeading,
+      basisLabelRow: outlookHeading + 1,
+      basisValueRow: outlookHeading + 2,
+      header: outlookHeader,
+      first: outlookHeader + 1,
+      cols: columns(outlookKeys, c0),
+    },
+    start: { heading: startHeading, header: startHeading + 1, first: startFirst, cols: startCols, sideCol, indexHeader, indexFirst, lineFirst },
+    updates: { heading: updatesHeading, header: updatesHeader, first: updatesFirst, firstUpdate: updatesFirst + s.p, cols: updateCols, reachLast },
+    chart: { row: settingsHeading, col: c0 + width + 1, lastRow: settingsHeading + 20, lastCol: c0 + width + 11 },
+  };
+}

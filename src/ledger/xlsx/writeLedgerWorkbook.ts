@@ -1,0 +1,70 @@
+import ExcelJS from "exceljs";
+import { EbbError } from "../../engine";
+import { addLedgerToWorkbook } from "../adapters/xlsx";
+import { describeLedger } from "../describe/describeLedger";
+import { defaultTag } from "../describe/names";
+
+/**
+ * The .xlsx workbook of `ebb ledger`: a data sheet with every series, then one ledger sheet
+ * per series. A series that cannot be written gets a sheet with the reason instead, and the
+ * others are still written.
+ */
+export async function writeLedgerWorkbook(
+  columns: { name: string; values: (number | null)[] }[],
+  settings: {
+    period?: number;
+    seasonality?: string;
+    trend?: string;
+    start?: string;
+    cycles?: number;
+    alpha?: number;
+    beta?: number;
+    gamma?: number;
+    phi?: number;
+    horizon: number;
+    coverage: number;
+  },
+  outPath: string,
+): Promise<void> {
+  const workbook = new ExcelJS.Workbook();
+  workbook.creator = "Ebb";
+  workbook.calcProperties.fullCalcOnLoad = true;
+  const used = new Set<string>(["data"]);
+  const usedTags = new Set<string>();
+  const data = workbook.addWorksheet("Data");
+  columns.forEach((c, j) => {
+    data.getCell(1, j + 1).value = c.name;
+    data.getCell(1, j + 1).font = { bold: true };
+    data.getColumn(j + 1).width = Math.max(10, Math.min(30, c.name.length + 2));
+    c.values.forEach((v, i) => {
+      if (v !== null && v !== undefined) data.getCell(i + 2, j + 1).value = v;
+    });
+  });
+  const { horizon, coverage, ...model } = settings;
+  for (const column of columns) {
+    const sheet = uniqueSheetName(`Ledger ${column.name}`, used);
+    let tag = defaultTag(sheet, "A1");
+    for (let k = 2; usedTags.has(tag.toLowerCase()); k++) tag = `${defaultTag(sheet, "A1").slice(0, 10)}${k}`;
+    usedTags.add(tag.toLowerCase());
+    try {
+      const desc = describeLedger({ history: column.values, name: column.name, settings: model, horizon, coverage, anchor: { sheet, cell: "A1" }, tag });
+      addLedgerToWorkbook(workbook, desc);
+    } catch (e) {
+      if (!(e instanceof EbbError)) throw e;
+      const ws = workbook.getWorksheet(sheet) ?? workbook.addWorksheet(sheet);
+      ws.getCell("A1").value = `Ebb ledger: ${column.name}`;
+      ws.getCell("A1").font = { bold: true, size: 14 };
+      ws.getCell("A3").value = `This series has no ledger: ${e.message}`;
+    }
+  }
+  await workbook.xlsx.writeFile(outPath);
+}
+
+/** A sheet name the hosts accept (31 characters, no : \ / ? * [ ]) and not yet used. */
+function uniqueSheetName(wanted: string, used: Set<string>): string {
+  const base = wanted.replace(/[:\\/?*[\]]/g, " ").replace(/^'+|'+$/g, "").trim().slice(0, 31) || "Ledger";
+  let name = base;
+  for (let k = 2; used.has(name.toLowerCase()); k++) name = `${base.slice(0, 31 - String(k).length - 1)} ${k}`;
+  used.add(name.toLowerCase());
+  return name;
+}

@@ -1,0 +1,111 @@
+/**
+ * The host adapter against a mock Excel JavaScript API (office-addin-mock): it writes the
+ * formulas, names and formats of a ledger in one batch (one sync after a look at the
+ * destination), with calculation and screen updating suspended, and refuses (asks) when the
+ * destination holds anything. Expected values: the description the adapter was given.
+ */
+import { describeLedger, type LedgerDescription } from "../../src/ledger";
+import { writeLedgerToExcel, type HostWriteResult } from "../../src/ledger/adapters/excelHost";
+import { parseCell } from "../../src/ledger/describe/addresses";
+import { quarterlyMargin } from "./support/cases";
+import { fakeExcel, type FakeExcel } from "./support/fakeExcel";
+
+function ledger(): LedgerDescription {
+  return describeLedger({ history: quarterlyMargin(), name: "Margin", settings: { period: 4, seasonality: "additive", trend: "linear" }, horizon: 6, coverage: 0.9, anchor: { sheet: "Ebb ledger", cell: "B2" } });
+}
+
+async function run(fake: FakeExcel, desc: LedgerDescription, options: Parameters<typeof writeLedgerToExcel>[1] = { notes: "notes" }): Promise<HostWriteResult> {
+  (globalThis as unknown as { Excel: unknown }).Excel = fake.Excel;
+  return writeLedgerToExcel(desc, options);
+}
+
+const WRITES = /^(range\.|format@|fill@|font@|names\.add|names\.delete|merge|clear|conditionalFormats|charts\.add|chart\.|notes\.add|comments\.add|worksheets\.add|suspend)/;
+
+describe("Excel host adapter", () => {
+  it("writes a new sheet in one batch: formulas, names, formats, notes, flags and chart", async () => {
+    const desc = ledger();
+    const fake = fakeExcel({ sheetExists: false });
+    const result = await run(fake, desc);
+    expect(result.status).toBe("written");
+    // One look (sheet and names), one batch of writes.
+    expect(fake.syncs()).toBe(2);
+    const writes = fake.calls.filter((c) => WRITES.test(c.what));
+    expect(writes.length).toBeGreaterThan(50);
+    expect(writes.every((c) => c.afterSyncs === 1)).toBe(true);
+    expect(fake.calls[fake.calls.length - 1].what).toBe("sync");
+    const suspend = fake.calls.filter((c) => c.what.startsWith("suspend")).map((c) => c.what);
+    expect(suspend).toEqual(["suspendApiCalculationUntilNextSync", "suspendScreenUpdatingUntilNextSync"]);
+    expect(fake.calls.find((c) => c.what === "worksheets.add")!.args).toEqual(["Ebb ledger"]);
+
+    // Every name, with its reference.
+    const names = fake.calls.filter((c) => c.what === "names.add").map((c) => [c.args[0], c.args[1]]);
+    expect(names).toEqual(desc.names.map((n) => [n.name, `=${n.refersTo}`]));
+    // Names come before the formulas that use them.
+    const firstName = fake.calls.findIndex((c) => c.what === "names.add");
+    const firstFormulas = fake.calls.findIndex((c) => c.what === "range.formulas");
+    expect(firstName).toBeLessThan(firstFormulas);
+
+    // One block holds every formula and constant at its place, and every number format.
+    const blockWrites = fake.calls.filter((c) => c.what === "range.formulas");
+    expect(blockWrites).toHaveLength(1);
+    const [address, grid] = blockWrites[0].args as [string, (string | number | null)[][]];
+    const top = parseCell(address.split(":")[0]);
+    const formats = fake.ranges.get(address)!.numberFormat as (string | null)[][];
+    for (const c of desc.cells) {
+      const written = grid[c.row - top.row][c.col - top.col];
+      if (c.formula) expect(written).toBe(c.formula);
+      else if (typeof c.value === "number") expect(written).toBe(c.value);
+      if (c.format) expect(formats[c.row - top.row][c.col - top.col]).toBe(c.format);
+    }
+    expect(grid.flat().filter((v) => typeof v === "string" && v.startsWith("=")).length).toBe(desc.cells.filter((c) => c.formula).length);
+
+    // Notes on every header, the merged title, the tracking-signal flag and the chart.
+    expect(fake.calls.filter((c) => c.what === "notes.add").length).toBe(desc.cells.filter((c) => c.note).length);
+    expect(fake.calls.filter((c) => c.what === "merge").map((c) => c.args[0])).toEqual(desc.merges);
+    const flagRange = desc.flags[0].range;
+    const cf = fake.ranges.get(flagRange)!.conditionalFormat as { cellValue: { rule: { operator: string; formula1: string; formula2: string } } };
+    expect(cf.cellValue.rule).toEqual({ formula1: "=-4", formula2: "=4", operator: "NotBetween" });
+    expect(fake.calls.filter((c) => c.what === "charts.add")).toHaveLength(1);
+    expect(fake.calls.find((c) => c.what === "chart.setPosition")!.args).toEqual([desc.chart.from, desc.chart.to]);
+    // Fills were set for the inputs.
+    const settingsAlpha = desc.layout.settings.alpha;
+    expect(fake.calls.some((c) => c.what.startsWith("fill@") && c.what.includes(settingsAlpha))).toBe(true);
+  });
+
+  it("writes into an existing empty sheet after looking at the destination: still one batch", async () => {
+    const fake = fakeExcel({ sheetExists: true });
+    const result = await run(fake, ledger(), { notes: "comments" });
+    expect(result.status).toBe("written");
+    expect(fake.syncs()).toBe(3);
+    const writes = fake.calls.filter((c) => WRITES.test(c.what));
+    expect(writes.every((c) => c.afterSyncs === 2)).toBe(true);
+    expect(fake.calls.some((c) => c.what === "comments.add")).toBe(true);
+  });
+
+  it("refuses and lists the occupied cells when the destination holds anything", async () => {
+    const desc = ledger();
+    const fake = fakeExcel({ sheetExists: true, occupied: { rowIndex: 9, columnIndex: 3, formulas: [["", "keep me"], [42, ""]] } });
+    const result = await run(fake, desc);
+    expect(result.status).toBe("needs-confirmation");
+    if (result.status !== "needs-confirmation") return;
+    expect(result.occupied).toEqual(["E10", "D11"]);
+    expect(result.occupiedCount).toBe(2);
+    expect(result.message).toMatch(/2 cells .* already hold something \(E10, D11\).*confirm/);
+    expect(fake.calls.filter((c) => WRITES.test(c.what))).toEqual([]);
+  });
+
+  it("refuses when the ledger's names already exist, and clears and writes once confirmed", async () => {
+    const desc = ledger();
+    const existing = [desc.names[0].name];
+    const asked = await run(fakeExcel({ sheetExists: true, existingNames: existing }), desc);
+    expect(asked.status).toBe("needs-confirmation");
+    const fake = fakeExcel({ sheetExists: true, existingNames: existing, occupied: { rowIndex: 1, columnIndex: 1, formulas: [["old"]] } });
+    const done = await run(fake, desc, { confirmed: true, notes: "none" });
+    expect(done.status).toBe("written");
+    expect(fake.calls.find((c) => c.what === "clear")!.args).toEqual([desc.footprint[0], "All"]);
+    expect(fake.calls.find((c) => c.what === "names.delete")!.args).toEqual(existing);
+    const clearAt = fake.calls.findIndex((c) => c.what === "clear");
+    const formulasAt = fake.calls.findIndex((c) => c.what === "range.formulas");
+    expect(clearAt).toBeLessThan(formulasAt);
+  });
+});

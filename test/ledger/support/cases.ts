@@ -1,0 +1,61 @@
+import { readFileSync } from "fs";
+import { DEMO_CSV_PATH } from "../../../src/preview/demo/generate-demo";
+import type { LedgerSettings } from "../../../src/ledger";
+
+/** Test histories: the invented Larkmere demo data (monthly, 2019-2025) and small made-up series. */
+export function demoColumns(): { name: string; values: (number | null)[] }[] {
+  const rows = readFileSync(DEMO_CSV_PATH, "utf8").trim().split(/\r?\n/).map((l) => l.split(","));
+  return rows[0].slice(1).map((name, j) => ({ name, values: rows.slice(1).map((r) => (r[j + 1] === "" ? null : Number(r[j + 1]))) }));
+}
+
+export function demoSeries(name: string): (number | null)[] {
+  const c = demoColumns().find((c) => c.name.startsWith(name));
+  if (!c) throw new Error(`no demo series ${name}`);
+  return c.values;
+}
+
+/** An additive-friendly series that crosses zero (a margin in thousands), period 4, with one gap. */
+export function quarterlyMargin(): (number | null)[] {
+  const shape = [-30, 12, 45, -8];
+  const out: (number | null)[] = [];
+  for (let t = 0; t < 40; t++) out.push(Math.round((5 + 0.8 * t + shape[t % 4] + 6 * Math.sin(t * 1.7)) * 100) / 100);
+  out[21] = null;
+  return out;
+}
+
+/** A five-day weekly pattern (odd season length) for the odd moving average. */
+export function workdays(): (number | null)[] {
+  const shape = [1.2, 1.0, 0.9, 0.95, 1.3];
+  const out: number[] = [];
+  for (let t = 0; t < 45; t++) out.push(Math.round((200 + 1.5 * t) * shape[t % 5] * (1 + 0.03 * Math.cos(t * 2.3)) * 10) / 10);
+  return out;
+}
+
+export interface LedgerCase {
+  label: string;
+  history: (number | null)[];
+  settings: LedgerSettings;
+}
+
+/** Both seasonalities (plus none), all trends, both starts; missing values; odd period; 3 start seasons. */
+export function ledgerCases(): LedgerCase[] {
+  const seed = demoSeries("Seed trays");
+  const bulbs = demoSeries("Flower bulbs");
+  const cases: LedgerCase[] = [];
+  for (const seasonality of ["multiplicative", "additive"]) {
+    for (const trend of ["linear", "damped", "none"]) {
+      for (const start of ["decomposition", "classic"]) {
+        cases.push({ label: `seed trays ${seasonality} ${trend} ${start}`, history: seed, settings: { period: 12, seasonality, trend, start } });
+      }
+    }
+  }
+  for (const trend of ["linear", "damped", "none"]) {
+    cases.push({ label: `bulbs with gaps multiplicative ${trend}`, history: bulbs, settings: { period: 12, seasonality: "multiplicative", trend } });
+    cases.push({ label: `margin additive ${trend} p=4 gap`, history: quarterlyMargin(), settings: { period: 4, seasonality: "additive", trend } });
+    cases.push({ label: `no season ${trend} decomposition`, history: seed.slice(0, 30), settings: { period: 1, trend, start: "decomposition" } });
+    cases.push({ label: `no season ${trend} classic`, history: seed.slice(0, 30), settings: { period: 1, trend, start: "classic" } });
+  }
+  cases.push({ label: "workdays odd period multiplicative classic", history: workdays(), settings: { period: 5, seasonality: "multiplicative", trend: "linear", start: "classic" } });
+  cases.push({ label: "workdays odd period additive 3 seasons", history: workdays(), settings: { period: 5, seasonality: "additive", trend: "damped", cycles: 3 } });
+  return cases;
+}
