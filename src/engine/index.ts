@@ -7,11 +7,11 @@ export { centeredMovingAverage, classicalIndices, leastSquaresLine } from "./dec
 export { decompositionStart } from "./start/decompositionStart";
 export { classicStart } from "./start/classicStart";
 export { optimizedStart } from "./start/optimizedStart";
-export { runRecursion, projectState, sumSquaredErrors, RecursionWorkspace } from "./recursion";
+export { runRecursion, projectState, trendMultipliers, sumSquaredErrors, RecursionWorkspace } from "./recursion";
 export { fitConstants, PHI_LOWER, PHI_UPPER } from "./fit";
 export { aicc } from "./aicc";
 export { fitModel, fitOne, modelStates, forecastModel, resolvePeriod, requiredLength, checkHorizon, type ModelOptions } from "./model";
-export { predictionInterval, checkCoverage, type Interval } from "./intervals";
+export { predictionInterval, additiveIntervalWeights, checkCoverage, type Interval } from "./intervals";
 export { holdoutScore, rollingBacktest, seasonalNaiveScale, type HoldoutResult, type BacktestRow } from "./backtest";
 export { detectPeriod } from "./period";
 export { acf, seasonalityTest90 } from "./acf";

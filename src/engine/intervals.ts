@@ -1,6 +1,7 @@
 import normalQuantile from "@stdlib/stats-base-dists-normal-quantile";
 import { badInput } from "./errors";
 import { checkHorizon, forecastModel } from "./model";
+import { trendMultipliers } from "./recursion";
 import { seededNormal } from "./random";
 import type { FittedModel } from "./types";
 
@@ -36,32 +37,41 @@ export function predictionInterval(model: FittedModel, horizon: number, coverage
   }
   const forecast = forecastModel(model, horizon);
   if (model.spec.seasonality === "multiplicative") return simulated(model, forecast, coverage);
+  const { sumSquares } = additiveIntervalWeights(model, horizon);
+  const sigma2 = model.sse / model.errorCount;
+  const z = normalQuantile(0.5 + coverage / 2, 0, 1);
+  const low = new Float64Array(horizon);
+  const high = new Float64Array(horizon);
+  for (let h = 1; h <= horizon; h++) {
+    const half = z * Math.sqrt(sigma2 * (1 + sumSquares[h - 1]));
+    low[h - 1] = forecast[h - 1] - half;
+    high[h - 1] = forecast[h - 1] + half;
+  }
+  return { forecast, low, high };
+}
+
+/**
+ * The weights of the analytic variance, c_j for j = h-1 (0 for h = 1), and their running sums
+ * of squares sum_{j<h} c_j^2, so that v_h = sigma^2 * (1 + sumSquares[h-1]).
+ */
+export function additiveIntervalWeights(model: FittedModel, horizon: number): { weight: Float64Array; sumSquares: Float64Array } {
   const { alpha, beta, gamma, phi } = model.constants;
   const p = model.spec.period;
   const trend = model.spec.trend;
   const betaStar = trend === "none" ? 0 : alpha * beta;
   const gammaStar = model.spec.seasonality === "none" ? 0 : gamma * (1 - alpha);
-  const ph = trend === "damped" ? phi : 1;
-  const sigma2 = model.sse / model.errorCount;
-  const z = normalQuantile(0.5 + coverage / 2, 0, 1);
-  const low = new Float64Array(horizon);
-  const high = new Float64Array(horizon);
+  const multipliers = trendMultipliers(trend, phi, horizon);
+  const weight = new Float64Array(horizon);
+  const sumSquares = new Float64Array(horizon);
   let sum = 0;
-  let phiJ = 0;
-  let power = 1;
-  for (let h = 1; h <= horizon; h++) {
-    if (h > 1) {
-      const j = h - 1;
-      power *= ph;
-      phiJ += power;
-      const c = alpha + betaStar * phiJ + (p >= 2 && j % p === 0 ? gammaStar : 0);
-      sum += c * c;
-    }
-    const half = z * Math.sqrt(sigma2 * (1 + sum));
-    low[h - 1] = forecast[h - 1] - half;
-    high[h - 1] = forecast[h - 1] + half;
+  for (let h = 2; h <= horizon; h++) {
+    const j = h - 1;
+    const c = alpha + betaStar * multipliers[j - 1] + (p >= 2 && j % p === 0 ? gammaStar : 0);
+    weight[h - 1] = c;
+    sum += c * c;
+    sumSquares[h - 1] = sum;
   }
-  return { forecast, low, high };
+  return { weight, sumSquares };
 }
 
 const PATHS = 5000;

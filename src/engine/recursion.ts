@@ -205,6 +205,25 @@ export function runRecursion(
 }
 
 /**
+ * Trend multipliers phi + phi^2 + ... + phi^h for h = 1..horizon (h for an undamped trend,
+ * 0 without a trend): how many periods of trend a forecast h steps ahead carries
+ * (Gardner & McKenzie 1985).
+ */
+export function trendMultipliers(trendKind: TrendKind, phi: number, horizon: number): Float64Array {
+  const out = new Float64Array(horizon);
+  if (trendKind === "none") return out;
+  const ph = trendKind === "damped" ? phi : 1;
+  let sum = 0;
+  let power = 1;
+  for (let h = 1; h <= horizon; h++) {
+    power *= ph;
+    sum += power;
+    out[h - 1] = sum;
+  }
+  return out;
+}
+
+/**
  * Point forecasts h = 1..horizon from a state:
  * (level + (phi + ... + phi^h) * trend) combined with the index for that period.
  */
@@ -218,14 +237,9 @@ export function projectState(
 ): Float64Array {
   const code = seasonCode(seasonality, p);
   const out = new Float64Array(horizon);
-  const ph = trendKind === "damped" ? phi : 1;
-  const trend = trendKind === "none" ? 0 : state.trend;
-  let damp = 0;
-  let power = 1;
+  const multipliers = trendMultipliers(trendKind, phi, horizon);
   for (let h = 1; h <= horizon; h++) {
-    power *= ph;
-    damp += power;
-    const base = state.level + damp * trend;
+    const base = state.level + multipliers[h - 1] * state.trend;
     const s = code === NONE ? 0 : state.indices[(h - 1) % p];
     out[h - 1] = code === MULT ? base * s : code === ADD ? base + s : base;
   }

@@ -51,6 +51,8 @@ export interface StartDetail {
   rawIndices: Float64Array;
   /** Normalised indices, position 0 = first period of the series. */
   normalIndices: Float64Array;
+  /** Seasonally adjusted window values the line is fitted to (decomposition start; NaN where missing). */
+  adjusted?: Float64Array;
   /** Regression line: value = intercept + slope * x, x as documented by `regressionX`. */
   intercept: number;
   slope: number;

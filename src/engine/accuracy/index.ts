@@ -6,6 +6,6 @@ export { mape } from "./mape";
 export { smape } from "./smape";
 export { mase, maseScale } from "./mase";
 export { bias } from "./bias";
-export { trackingSignal } from "./tracking";
+export { trackingSignal, runningErrorSum } from "./tracking";
 export { theilU } from "./theilU";
 export { accuracyTable, type AccuracyRow } from "./table";

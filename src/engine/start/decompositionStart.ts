@@ -75,6 +75,7 @@ export function decompositionStart(
   };
   base.intercept = intercept;
   base.slope = slope;
+  base.adjusted = deseasonalised;
   // Window length is a whole number of seasons, so the next period has position 0.
   return { method: "decomposition", state: { level, trend: slope, indices }, firstUpdate: window, detail: base };
 }

@@ -4,7 +4,7 @@ import { OUTLOOK_BASIS, OUTLOOK_COLUMNS, SECTION } from "./labels";
 import type { OutlookColumnKey } from "./layout";
 import { FORMAT } from "./sheet";
 import type { OutlookRowCells } from "./types";
-import { spreadWeights, trendMultipliers } from "./workings";
+import { additiveIntervalWeights, trendMultipliers } from "../../engine";
 
 /**
  * Section 4: the next `horizon` periods from the last row of the update table, found with
@@ -72,8 +72,9 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
   };
   for (const key of Object.keys(cols) as OutlookColumnKey[]) cells.text(o.header, cols[key]!, headers[key]!.label, "header", headers[key]!.note);
 
-  const multipliers = trendMultipliers(model.constants.phi, H);
-  const weights = mult ? undefined : spreadWeights(f, H);
+  // The multiplier column is written as phi + phi^2 + ... for every trend (phi is 1 unless damped).
+  const multipliers = trendMultipliers("damped", model.constants.phi, H);
+  const weights = mult ? undefined : additiveIntervalWeights(model, H);
   const season = nm(ctx, "season");
   const [alpha, beta, gamma, phi] = ["alpha", "beta", "gamma", "phi"].map((k) => nm(ctx, k));
   const out: OutlookRowCells[] = [];

@@ -2,7 +2,6 @@ import { cellAddress } from "./addresses";
 import { abs, nm, type SectionContext } from "./context";
 import { INDEX_TABLE, LINE_ROWS, SECTION, START_COLUMNS } from "./labels";
 import { FORMAT } from "./sheet";
-import { seasonallyAdjusted } from "./workings";
 
 /**
  * Section 2: the start table (period, position, actual, moving average, ratio or difference,
@@ -92,7 +91,7 @@ export function startSection(ctx: SectionContext): void {
   }
 
   // Seasonally adjusted values and the line's x (decomposition start).
-  const adjusted = f.model.spec.start === "decomposition" && detail ? seasonallyAdjusted(f) : [];
+  const adjusted = f.model.spec.start === "decomposition" && detail?.adjusted ? Array.from(detail.adjusted, (v) => (Number.isNaN(v) ? null : v)) : [];
   if (cols.adjusted !== undefined) {
     for (let t = 0; t < W; t++) {
       const op = mult ? "/" : "-";

@@ -3,7 +3,7 @@ import { abs, nm, type SectionContext } from "./context";
 import { FLAG_NOTE, SECTION, START_ROW_NOTE, UPDATE_COLUMNS } from "./labels";
 import { FORMAT } from "./sheet";
 import type { ConditionalFlag, UpdateColumnKey } from "./types";
-import { runningErrorSums } from "./workings";
+import { runningErrorSum } from "../../engine";
 
 /** Defined names over the update table's columns, reaching below the last row. */
 export const COLUMN_NAMES: Partial<Record<UpdateColumnKey, string>> = {
@@ -78,7 +78,7 @@ export function updatesSection(ctx: SectionContext): { rows: { period: number; r
     if (cols.index !== undefined) cells.formula(r, cols.index, `=${ctx.refs.startIndex[t % p]}`, state.indices[i], mult ? FORMAT.ratio : FORMAT.units, "linked");
   }
 
-  const sums = runningErrorSums(f);
+  const sums = runningErrorSum(f.states.error.subarray(fu));
   for (let t = fu; t < n; t++) appendUpdateRow(ctx, t, sums[t - fu], rows);
 
   // Names over the columns, reaching below the table so added rows are included.
