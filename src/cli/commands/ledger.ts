@@ -1,32 +1,15 @@
+import type { LedgerWorkbookSettings } from "../../ledger/describe/types";
 import { CliError } from "../cliError";
 import type { RunSettings } from "../options";
 import { parseSeriesCsv, readInputText, type SeriesColumn } from "../readCsv";
 
 /** The settings the .xlsx ledger writer takes (src/ledger/xlsx/writeLedgerWorkbook.ts). */
-export interface LedgerSettings {
-  period?: number;
-  seasonality?: string;
-  trend?: string;
-  start?: string;
-  cycles?: number;
-  alpha?: number;
-  beta?: number;
-  gamma?: number;
-  phi?: number;
-  horizon: number;
-  coverage: number;
-}
+export type LedgerSettings = LedgerWorkbookSettings;
 
 type WriteLedgerWorkbook = (columns: SeriesColumn[], settings: LedgerSettings, outPath: string) => Promise<void>;
 
 /** The ledger's interval coverage when --coverage is left out (DESIGN: coverage default 0.95). */
 export const LEDGER_COVERAGE = 0.95;
-
-// Loaded on demand, so the other commands work while the ledger writer is absent. A path held
-// in a variable keeps the type checker from requiring the module to exist. require() rather than
-// import(): the installed launcher (bin/ebb.js) registers tsx for require only, and Node's own
-// import() cannot load a .ts file.
-const WRITER_MODULE = "../../ledger/xlsx/writeLedgerWorkbook";
 
 /** `ledger`: an .xlsx workbook with the data and one ledger per series. */
 export async function runLedger(file: string, settings: RunSettings): Promise<number> {
@@ -55,16 +38,11 @@ export async function runLedger(file: string, settings: RunSettings): Promise<nu
   return 0;
 }
 
+/**
+ * The writer is loaded when the command runs: it brings in the xlsx library, which the other
+ * commands do not need, so they start faster.
+ */
 function loadWriter(): WriteLedgerWorkbook {
-  try {
-    require.resolve(WRITER_MODULE);
-  } catch {
-    throw new CliError("The .xlsx ledger writer (src/ledger/xlsx/writeLedgerWorkbook.ts) is not part of this installation, so the ledger command cannot run. The other commands work without it.");
-  }
   // eslint-disable-next-line @typescript-eslint/no-require-imports
-  const mod: { writeLedgerWorkbook?: WriteLedgerWorkbook } = require(WRITER_MODULE);
-  if (typeof mod.writeLedgerWorkbook !== "function") {
-    throw new CliError("src/ledger/xlsx/writeLedgerWorkbook.ts does not export a function writeLedgerWorkbook; the ledger command cannot run.");
-  }
-  return mod.writeLedgerWorkbook;
+  return (require("../../ledger/xlsx/writeLedgerWorkbook") as { writeLedgerWorkbook: WriteLedgerWorkbook }).writeLedgerWorkbook;
 }

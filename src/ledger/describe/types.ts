@@ -19,6 +19,12 @@ export interface LedgerSettings {
   phi?: number;
 }
 
+/** What the .xlsx writer of `ebb ledger` takes: the settings plus the outlook's length and coverage. */
+export interface LedgerWorkbookSettings extends LedgerSettings {
+  horizon: number;
+  coverage: number;
+}
+
 /** Where the ledger goes: a sheet and the top-left cell of its block. */
 export interface LedgerAnchor {
   sheet: string;

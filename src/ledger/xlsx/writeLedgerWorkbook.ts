@@ -3,6 +3,7 @@ import { EbbError } from "../../engine";
 import { addLedgerToWorkbook } from "../adapters/xlsx";
 import { describeLedger } from "../describe/describeLedger";
 import { defaultTag } from "../describe/names";
+import type { LedgerWorkbookSettings } from "../describe/types";
 
 /**
  * The .xlsx workbook of `ebb ledger`: a data sheet with every series, then one ledger sheet
@@ -11,19 +12,7 @@ import { defaultTag } from "../describe/names";
  */
 export async function writeLedgerWorkbook(
   columns: { name: string; values: (number | null)[] }[],
-  settings: {
-    period?: number;
-    seasonality?: string;
-    trend?: string;
-    start?: string;
-    cycles?: number;
-    alpha?: number;
-    beta?: number;
-    gamma?: number;
-    phi?: number;
-    horizon: number;
-    coverage: number;
-  },
+  settings: LedgerWorkbookSettings,
   outPath: string,
 ): Promise<void> {
   const workbook = new ExcelJS.Workbook();
