@@ -1,0 +1,12 @@
+/** Opens the demo workbook on the shared HyperFormula engine with every EBB function registered. */
+import { createEbbWorkbook } from "../../functions/hyperformula";
+import { buildDemoWorkbook, type DemoWorkbook } from "./demoWorkbook";
+import { PreviewWorkbook } from "./previewWorkbook";
+
+export function openDemoWorkbook(csvText: string, notice: string): { workbook: PreviewWorkbook; demo: DemoWorkbook } {
+  const demo = buildDemoWorkbook(csvText, notice);
+  // No output rounding: the grid shows what the engine computed, to the last digit (the engine's
+  // default rounds exported numbers to 10 significant digits).
+  const hf = createEbbWorkbook(demo.sheets, { smartRounding: false });
+  return { workbook: new PreviewWorkbook(hf), demo };
+}

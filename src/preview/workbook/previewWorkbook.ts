@@ -1,0 +1,210 @@
+/**
+ * The preview's workbook: a thin reading and editing layer over the shared HyperFormula instance
+ * (every EBB function registered). The grid, the formula bar and the panel's preview port speak
+ * to this, never to HyperFormula directly.
+ */
+import type { HyperFormula, RawCellContent, SimpleCellAddress } from "hyperformula";
+import { DetailedCellError } from "hyperformula";
+import { a1, quoteSheet } from "./addresses";
+import { numberText } from "./cellText";
+
+export type CellKind = "empty" | "number" | "text" | "boolean" | "error";
+
+/** Where a cell sits in a spilled array: not in one, its formula cell, or a cell it spilled into. */
+export type SpillRole = "none" | "anchor" | "part";
+
+export interface CellView {
+  kind: CellKind;
+  /** What the grid shows. */
+  text: string;
+  /** The value at full precision (numbers), for reading back. */
+  value: number | string | boolean | null;
+  /** Error code (#N/A, #VALUE!...) and its message, when the cell holds an error. */
+  error?: { code: string; message: string };
+  spill: SpillRole;
+  /** The spilled block this cell belongs to (A1 range on its sheet). */
+  spillRange?: string;
+  hasFormula: boolean;
+}
+
+export interface CellRect {
+  top: number;
+  left: number;
+  bottom: number;
+  right: number;
+}
+
+type Listener = () => void;
+
+interface ArrayVertexLike {
+  getRangeOrUndef(): { start: SimpleCellAddress; end: SimpleCellAddress } | undefined;
+}
+
+export class PreviewWorkbook {
+  private readonly listeners = new Set<Listener>();
+  private readonly sizes = new Map<string, { rows: number; cols: number }>();
+
+  constructor(readonly hf: HyperFormula) {
+    const notify = (): void => {
+      this.sizes.clear();
+      this.listeners.forEach((l) => l());
+    };
+    hf.on("valuesUpdated", notify);
+    hf.on("sheetAdded", notify);
+    hf.on("sheetRemoved", notify);
+    hf.on("sheetRenamed", notify);
+  }
+
+  /** Called after any change of values or sheets (edits, the panel's writes). */
+  onChange(listener: Listener): () => void {
+    this.listeners.add(listener);
+    return () => this.listeners.delete(listener);
+  }
+
+  sheetNames(): string[] {
+    return this.hf.getSheetNames();
+  }
+
+  sheetId(name: string): number {
+    const id = this.hf.getSheetId(name);
+    if (id === undefined) throw new Error(`There is no sheet named "${name}".`);
+    return id;
+  }
+
+  /**
+   * Rows and columns in use on a sheet: up to the last cell holding something. (The engine's own
+   * dimensions also count empty cells that a range or name merely refers to, such as the rows a
+   * ledger's names reserve for future actuals.)
+   */
+  size(sheet: string): { rows: number; cols: number } {
+    const cached = this.sizes.get(sheet);
+    if (cached) return cached;
+    const values = this.hf.getSheetValues(this.sheetId(sheet));
+    let rows = 0;
+    let cols = 0;
+    values.forEach((line, r) => {
+      for (let c = line.length - 1; c >= 0; c--) {
+        const v = line[c];
+        if (v !== null && v !== undefined) {
+          rows = r + 1;
+          cols = Math.max(cols, c + 1);
+          break;
+        }
+      }
+    });
+    const size = { rows, cols };
+    this.sizes.set(sheet, size);
+    return size;
+  }
+
+  cell(sheet: string, row: number, col: number): CellView {
+    const address = { sheet: this.sheetId(sheet), row, col };
+    const raw = this.hf.getCellValue(address);
+    const hasFormula = this.hf.doesCellHaveFormula(address);
+    const role = this.spillRole(address);
+    const range = role === "none" ? undefined : this.spillRangeOf(address);
+    const base = { spill: role, spillRange: range ? rangeText(range) : undefined, hasFormula };
+    if (raw instanceof DetailedCellError) {
+      return { ...base, kind: "error", text: raw.value, value: raw.value, error: { code: raw.value, message: raw.message || describeCode(raw.value) } };
+    }
+    if (raw === null || raw === undefined) return { ...base, kind: "empty", text: "", value: null };
+    if (typeof raw === "number") return { ...base, kind: "number", text: numberText(raw), value: raw };
+    if (typeof raw === "boolean") return { ...base, kind: "boolean", text: raw ? "TRUE" : "FALSE", value: raw };
+    return { ...base, kind: "text", text: String(raw), value: String(raw) };
+  }
+
+  /**
+   * What the formula bar shows for a cell: its formula, or its typed value. A cell that an array
+   * spilled into shows the formula of the array's first cell (it cannot be edited there).
+   */
+  input(sheet: string, row: number, col: number): { text: string; spilledFrom?: string } {
+    const address = { sheet: this.sheetId(sheet), row, col };
+    if (this.spillRole(address) === "part") {
+      const range = this.spillRangeOf(address);
+      if (range) {
+        return { text: this.hf.getCellFormula(range.start) ?? "", spilledFrom: a1(range.start.row, range.start.col) };
+      }
+    }
+    const formula = this.hf.getCellFormula(address);
+    if (formula !== undefined) return { text: formula };
+    const raw = this.hf.getCellSerialized(address);
+    if (raw === null || raw === undefined) return { text: "" };
+    return { text: typeof raw === "number" ? String(raw) : typeof raw === "boolean" ? (raw ? "TRUE" : "FALSE") : String(raw) };
+  }
+
+  /**
+   * Sets a cell from what a person typed: "=..." is a formula, a number is a number, empty text
+   * clears the cell, anything else is text. Returns a message instead of throwing.
+   */
+  setInput(sheet: string, row: number, col: number, text: string): { ok: true } | { ok: false; message: string } {
+    const address = { sheet: this.sheetId(sheet), row, col };
+    if (!this.hf.isItPossibleToSetCellContents(address)) {
+      return { ok: false, message: `${a1(row, col)} cannot be changed here.` };
+    }
+    try {
+      this.hf.setCellContents(address, [[parseInput(text)]]);
+      return { ok: true };
+    } catch (e) {
+      return { ok: false, message: `${a1(row, col)} was not changed: ${e instanceof Error ? e.message : String(e)}` };
+    }
+  }
+
+  /** Reference text for a range on a sheet, as formulas and the panel write it: Sales!B2:B85. */
+  reference(sheet: string, rect: CellRect): string {
+    const start = a1(rect.top, rect.left);
+    const end = a1(rect.bottom, rect.right);
+    return `${quoteSheet(sheet)}!${start === end ? start : `${start}:${end}`}`;
+  }
+
+  private spillRole(address: SimpleCellAddress): SpillRole {
+    if (!this.hf.isCellPartOfArray(address)) return "none";
+    const type = this.hf.getCellType(address);
+    return String(type) === "ARRAYFORMULA" ? "anchor" : "part";
+  }
+
+  /** The spilled block a cell belongs to (HyperFormula keeps one vertex per array). */
+  private spillRangeOf(address: SimpleCellAddress): { start: SimpleCellAddress; end: SimpleCellAddress } | undefined {
+    const vertex = this.hf.dependencyGraph.getCell(address) as unknown as Partial<ArrayVertexLike> | undefined;
+    if (!vertex || typeof vertex.getRangeOrUndef !== "function") return undefined;
+    return vertex.getRangeOrUndef();
+  }
+}
+
+function rangeText(r: { start: SimpleCellAddress; end: SimpleCellAddress }): string {
+  return `${a1(r.start.row, r.start.col)}:${a1(r.end.row, r.end.col)}`;
+}
+
+/** Typed text to cell content: numbers as numbers, "=..." as formulas, "" clears. */
+export function parseInput(text: string): RawCellContent {
+  const t = text.trim();
+  if (t === "") return null;
+  if (t.startsWith("=")) return t;
+  if (/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t)) return Number(t);
+  if (/^true$/i.test(t)) return true;
+  if (/^false$/i.test(t)) return false;
+  return text;
+}
+
+/** Plain words for errors that come without a message. */
+export function describeCode(code: string): string {
+  switch (code) {
+    case "#SPILL!":
+      return "The result needs more room: clear the cells it would spill into.";
+    case "#REF!":
+      return "The formula refers to a cell that does not exist.";
+    case "#NAME?":
+      return "Unknown function or name: check the spelling.";
+    case "#DIV/0!":
+      return "Division by zero.";
+    case "#CYCLE!":
+      return "The formula refers to itself, directly or through other cells.";
+    case "#N/A":
+      return "A value is not available yet.";
+    case "#VALUE!":
+      return "A value has the wrong type.";
+    case "#NUM!":
+      return "A number is out of range.";
+    default:
+      return "The formula could not be computed.";
+  }
+}
