@@ -91,6 +91,22 @@ describe("verify", () => {
     );
   });
 
+  it("reports a number typed into a cell of the ledger block that Ebb left empty", () => {
+    const input = mutationCases[1];
+    const { hf, desc, sheetId } = ledgerInHyperFormula(input);
+    const described = new Set(desc.cells.map((c) => `${c.row}:${c.col}`));
+    const rows = desc.cells.map((c) => c.row);
+    const cols = desc.cells.map((c) => c.col);
+    // the first empty cell of the block's middle row, scanning from the left
+    const row = Math.round((Math.min(...rows) + Math.max(...rows)) / 2);
+    let col = Math.min(...cols);
+    while (described.has(`${row}:${col}`)) col++;
+    expect(col).toBeLessThanOrEqual(Math.max(...cols));
+    hf.setCellContents({ sheet: sheetId, row, col }, [[5]]);
+    const report = verifyLedger(hyperFormulaReader(hf, input.anchor.sheet), input.anchor);
+    expect(report.problems.map((p) => [p.row, p.col, p.kind])).toEqual([[row, col, "unexpected-content"]]);
+  });
+
   it("accepts a typed alpha, and flags only the multiplicative gaps as due for a refresh", () => {
     for (const input of [mutationCases[0], mutationCases[2]]) {
       const { hf, desc, sheetId } = ledgerInHyperFormula(input);

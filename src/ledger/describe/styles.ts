@@ -17,7 +17,7 @@ export const ROLE_STYLES: Record<StyleRole, RoleStyle> = {
   header: { bold: true, color: "#23404A", fill: "#DDE7E4", wrap: true },
   label: {},
   input: { fill: "#FBEFC8", bold: true },
-  written: { color: "#7B7B7B" },
+  written: { color: "#595959" }, // 7:1 on white, above the 4.5:1 accessibility minimum
   actual: { fill: "#EEF3F7" },
   linked: { color: "#4F6670", fill: "#F2F2F6" },
   start: { fill: "#F2F2F6" },

@@ -141,6 +141,26 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
       const found = read(r, c!);
       if (found.formula !== undefined || (found.value !== null && found.value !== "")) {
         problems.push(problem(r, c!, "unexpected-content", null, found.formula ?? found.value, "This cell lies inside the update table's reach and is read by the outlook and scorecard. Clear it, or add periods with Extend."));
+        reported.add(key(r, c!));
+      }
+    }
+  }
+  // Anything typed into a cell of the ledger's block that Ebb left empty.
+  const described = new Set(expected.cells.map((c) => key(c.row, c.col)));
+  let top = Infinity, bottom = -Infinity, left = Infinity, right = -Infinity;
+  for (const c of expected.cells) {
+    top = Math.min(top, c.row);
+    bottom = Math.max(bottom, c.row);
+    left = Math.min(left, c.col);
+    right = Math.max(right, c.col);
+  }
+  for (let r = top; r <= bottom; r++) {
+    for (let c = left; c <= right; c++) {
+      if (described.has(key(r, c)) || reported.has(key(r, c))) continue;
+      const found = read(r, c);
+      if (found.formula !== undefined || (found.value !== null && found.value !== "")) {
+        problems.push(problem(r, c, "unexpected-content", null, found.formula ?? found.value, "Ebb left this cell of the ledger empty. Clear it, so that nobody reads it as part of the ledger."));
+        reported.add(key(r, c));
       }
     }
   }
