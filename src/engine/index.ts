@@ -11,7 +11,7 @@ export { runRecursion, projectState, trendMultipliers, sumSquaredErrors, Recursi
 export { fitConstants, PHI_LOWER, PHI_UPPER } from "./fit";
 export { aicc } from "./aicc";
 export { fitModel, fitOne, modelStates, forecastModel, resolvePeriod, requiredLength, checkHorizon, type ModelOptions } from "./model";
-export { predictionInterval, additiveIntervalWeights, checkCoverage, type Interval } from "./intervals";
+export { predictionInterval, additiveIntervalWeights, estimatedQuantities, varianceDivisor, checkCoverage, type Interval } from "./intervals";
 export { holdoutScore, rollingBacktest, seasonalNaiveScale, type HoldoutResult, type BacktestRow } from "./backtest";
 export { detectPeriod } from "./period";
 export { acf, seasonalityTest90 } from "./acf";

@@ -3,7 +3,7 @@ import { badInput } from "./errors";
 import { checkHorizon, forecastModel } from "./model";
 import { trendMultipliers } from "./recursion";
 import { seededNormal } from "./random";
-import type { FittedModel } from "./types";
+import type { FittedModel, ModelSpec } from "./types";
 
 export interface Interval {
   forecast: Float64Array;
@@ -25,7 +25,7 @@ export function checkCoverage(coverage: number): number {
  *   v_h = sigma^2 * (1 + sum_{j=1}^{h-1} c_j^2),  c_j = alpha + beta* phi_j + gamma* d_{j,p},
  * with phi_j = phi + ... + phi^j (j for an undamped trend), d_{j,p} = 1 when p divides j, and
  * the classic recursions mapped to their error-correction form: beta* = alpha*beta,
- * gamma* = gamma*(1-alpha) (the seasonal update on the new level). sigma^2 = SSE / errors.
+ * gamma* = gamma*(1-alpha) (the seasonal update on the new level). sigma^2 = SSE / (errors - estimated quantities).
  * Multiplicative seasonality: a seeded simulation of the fitted recursions with Gaussian
  * relative errors (sigma from the one-step relative errors), 5000 paths, empirical quantiles.
  */
@@ -38,7 +38,7 @@ export function predictionInterval(model: FittedModel, horizon: number, coverage
   const forecast = forecastModel(model, horizon);
   if (model.spec.seasonality === "multiplicative") return simulated(model, forecast, coverage);
   const { sumSquares } = additiveIntervalWeights(model, horizon);
-  const sigma2 = model.sse / model.errorCount;
+  const sigma2 = model.sse / varianceDivisor(model);
   const z = normalQuantile(0.5 + coverage / 2, 0, 1);
   const low = new Float64Array(horizon);
   const high = new Float64Array(horizon);
@@ -74,6 +74,27 @@ export function additiveIntervalWeights(model: FittedModel, horizon: number): { 
   return { weight, sumSquares };
 }
 
+/**
+ * Quantities a model estimates from its history: its smoothing constants (alpha; beta and the
+ * start trend with a trend; phi when damped; gamma and p-1 free start indices with seasons)
+ * and the start level. Fixed by the model's form, whether the constants were fitted or typed.
+ */
+export function estimatedQuantities(spec: ModelSpec): number {
+  const seasonal = spec.seasonality !== "none" && spec.period >= 2;
+  const trend = spec.trend !== "none";
+  return 2 + (trend ? 2 : 0) + (spec.trend === "damped" ? 1 : 0) + (seasonal ? spec.period : 0);
+}
+
+/**
+ * Divisor of the error variance: the number of one-step errors less the quantities the model
+ * estimates (as the forecast package for R does for its state-space models, Hyndman &
+ * Khandakar 2008, J. Stat. Software 27(3)), so that short histories with many parameters do
+ * not get intervals that are too narrow. At least 1.
+ */
+export function varianceDivisor(model: FittedModel): number {
+  return Math.max(1, model.errorCount - estimatedQuantities(model.spec));
+}
+
 const PATHS = 5000;
 const SEED = 20260101;
 
@@ -83,7 +104,7 @@ function simulated(model: FittedModel, forecast: Float64Array, coverage: number)
   const { alpha, beta, gamma } = model.constants;
   const trendKind = model.spec.trend;
   const ph = trendKind === "damped" ? model.constants.phi : 1;
-  const sigma = Math.sqrt(model.relativeSse / model.errorCount);
+  const sigma = Math.sqrt(model.relativeSse / varianceDivisor(model));
   const draw = seededNormal(SEED);
   // All paths advance one step at a time, drawing step by step, so the interval for a
   // given step does not depend on how many steps were asked for.

@@ -24,6 +24,16 @@ export interface ModelOptions {
   phi?: number;
 }
 
+/**
+ * The trends `auto` chooses between: damped and none. An undamped linear trend carried a year
+ * or more ahead over-forecasts turning series; the damped trend was introduced for exactly
+ * that (Gardner & McKenzie 1985) and is among the most accurate methods on the M3 data
+ * (Makridakis & Hibon 2000; Gardner 2006, IJF 22(4)). Ebb's own M3 benchmark agrees: adding
+ * the linear trend to the candidates makes the automatic model less accurate on monthly and
+ * quarterly data (test/bench/RESULTS.md). A linear trend is used when asked for by name.
+ */
+export const AUTO_TRENDS: TrendKind[] = ["damped", "none"];
+
 /** Resolve the season length: a typed one, or detected from the history. */
 export function resolvePeriod(y: Float64Array, period: number | undefined): number {
   const p = checkPeriod(period);
@@ -51,7 +61,7 @@ export function fitModel(history: ArrayLike<number | null | undefined>, options:
   const seasonalities =
     options.seasonality === "none" ? (["none"] as Seasonality[]) : seasonalityCandidates(y, p, parseSeasonality(options.seasonality));
   const trendChoice = parseTrend(options.trend);
-  const trends: TrendKind[] = trendChoice === "auto" ? ["linear", "damped", "none"] : [trendChoice];
+  const trends: TrendKind[] = trendChoice === "auto" ? AUTO_TRENDS : [trendChoice];
   if (seasonalities.length * trends.length === 1) return fitOne(y, p, seasonalities[0], trends[0], start, cycles, fixed);
   let best: FittedModel | undefined;
   let firstError: unknown;

@@ -156,7 +156,8 @@ describe("automatic choice of seasonality and trend", () => {
     const chosen = fitModel(history, { period: P, seasonality: "auto", trend: "auto" });
     const candidates: FittedModel[] = [];
     for (const seasonality of ["multiplicative", "additive"] as Seasonality[]) {
-      for (const trend of ["linear", "damped", "none"] as TrendKind[]) candidates.push(fitModel(history, { period: P, seasonality, trend }));
+      // auto's trend candidates: damped and none (src/engine/model.ts, AUTO_TRENDS)
+      for (const trend of ["damped", "none"] as TrendKind[]) candidates.push(fitModel(history, { period: P, seasonality, trend }));
     }
     const counts = new Set(candidates.map((m) => m.errorCount));
     expect(counts.size).toBe(1); // same update window, so AICc values are comparable
@@ -171,10 +172,10 @@ describe("automatic choice of seasonality and trend", () => {
     expect(chosen.aicc).toBeCloseTo(n * Math.log(chosen.sse / n) + 2 * k + (2 * k * (k + 1)) / (n - k - 1), 9);
   });
 
-  it("auto trend alone compares the three trends under the given seasonality", () => {
+  it("auto trend alone compares the damped and the no-trend model under the given seasonality", () => {
     const history = AIR.slice(0, 96);
     const chosen = fitModel(history, { period: P, seasonality: "additive", trend: "auto" });
-    const aiccs = (["linear", "damped", "none"] as TrendKind[]).map((trend) => fitModel(history, { period: P, seasonality: "additive", trend }).aicc);
+    const aiccs = (["damped", "none"] as TrendKind[]).map((trend) => fitModel(history, { period: P, seasonality: "additive", trend }).aicc);
     expect(chosen.spec.seasonality).toBe("additive");
     expect(chosen.aicc).toBe(Math.min(...aiccs));
   });
@@ -203,7 +204,9 @@ describe("prediction intervals", () => {
     // the book's class-1 form with the classic constants mapped to error-correction form
     // (beta* = alpha*beta; gamma* = gamma*(1-alpha) for the seasonal update on the new level).
     const { alpha, beta, gamma } = model.constants;
-    const sigma2 = model.sse / model.errorCount;
+    // sigma^2: SSE over the errors less the estimated quantities (Hyndman & Khandakar 2008):
+    // alpha, beta, gamma, start level, start trend and p-1 free start indices = 2 + 2 + P
+    const sigma2 = model.sse / (model.errorCount - (2 + 2 + P));
     const variance = (hh: number) => {
       let s = 0;
       for (let j = 1; j < hh; j++) s += (alpha + alpha * beta * j + (j % P === 0 ? gamma * (1 - alpha) : 0)) ** 2;

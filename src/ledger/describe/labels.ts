@@ -171,7 +171,10 @@ export const OUTLOOK_BASIS = {
   level: { label: "Level then", note: "Level in the last row of the update table." },
   trend: { label: "Trend then", note: "Trend in the last row of the update table." },
   rows: { label: "Update rows", note: "Rows in the update table, start rows included: finds the last row, so the outlook follows when rows are added." },
-  variance: { label: "Error variance", note: "Sum of squared errors / number of errors." },
+  variance: {
+    label: "Error variance",
+    note: "Sum of squared errors / (number of errors - quantities the model estimates: the smoothing constants, the start level and trend, and all start indices but one). Hyndman & Khandakar (2008).",
+  },
   z: { label: "z for coverage", note: "Standard normal quantile at 0.5 + coverage / 2." },
 } as const;
 

@@ -4,7 +4,7 @@ import { OUTLOOK_BASIS, OUTLOOK_COLUMNS, SECTION } from "./labels";
 import type { OutlookColumnKey } from "./layout";
 import { FORMAT } from "./sheet";
 import type { OutlookRowCells } from "./types";
-import { additiveIntervalWeights, trendMultipliers } from "../../engine";
+import { additiveIntervalWeights, estimatedQuantities, trendMultipliers, varianceDivisor } from "../../engine";
 
 /**
  * Section 4: the next `horizon` periods from the last row of the update table, found with
@@ -34,10 +34,11 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
     ["level", `=INDEX(${nm(ctx, "levels")},${rowsCell})`, model.final.level, FORMAT.units],
     ["trend", `=INDEX(${nm(ctx, "trends")},${rowsCell})`, model.final.trend, FORMAT.trend],
   );
-  const sigma2 = model.sse / model.errorCount;
+  const sigma2 = model.sse / varianceDivisor(model);
   if (!mult) {
     const z = (f.interval.high[0] - f.forecast[0]) / Math.sqrt(sigma2);
-    basis.push(["variance", `=SUMSQ(${nm(ctx, "errors")})/COUNT(${nm(ctx, "errors")})`, sigma2, FORMAT.units]);
+    const lost = estimatedQuantities(model.spec);
+    basis.push(["variance", `=SUMSQ(${nm(ctx, "errors")})/MAX(1,COUNT(${nm(ctx, "errors")})-${lost})`, sigma2, FORMAT.units]);
     basis.push(["z", `=NORM.S.INV(0.5+${nm(ctx, "coverage")}/2)`, z, FORMAT.constant]);
   }
   basis.forEach(([key, formula, value, format], i) => {
