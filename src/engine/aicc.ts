@@ -12,3 +12,12 @@ export function aicc(sse: number, n: number, estimated: number): number {
   const aic = n * Math.log(Math.max(sse, 1e-300) / n) + 2 * k;
   return aic + (2 * k * (k + 1)) / (n - k - 1);
 }
+
+/**
+ * Akaike information criterion, n log(SSE/n) + 2k with k as for AICc: the choice falls back on
+ * it when the history is too short for AICc's small-sample correction in every candidate.
+ */
+export function aic(sse: number, n: number, estimated: number): number {
+  if (!(n > 0) || !(sse >= 0)) return NaN;
+  return n * Math.log(Math.max(sse, 1e-300) / n) + 2 * (estimated + 1);
+}

@@ -9,7 +9,7 @@ export { classicStart } from "./start/classicStart";
 export { optimizedStart } from "./start/optimizedStart";
 export { runRecursion, projectState, trendMultipliers, sumSquaredErrors, RecursionWorkspace } from "./recursion";
 export { fitConstants, PHI_LOWER, PHI_UPPER } from "./fit";
-export { aicc } from "./aicc";
+export { aic, aicc } from "./aicc";
 export { fitModel, fitOne, modelStates, forecastModel, resolvePeriod, requiredLength, checkHorizon, type ModelOptions } from "./model";
 export { predictionInterval, additiveIntervalWeights, estimatedQuantities, varianceDivisor, checkCoverage, type Interval } from "./intervals";
 export { holdoutScore, rollingBacktest, seasonalNaiveScale, type HoldoutResult, type BacktestRow } from "./backtest";

@@ -1,4 +1,4 @@
-import { aicc } from "./aicc";
+import { aic, aicc } from "./aicc";
 import { badInput, notEnough } from "./errors";
 import { fitConstants, freeAxes, type ConstantChoice } from "./fit";
 import { checkConstant, checkPeriod, parseSeasonality, parseStart, parseTrend, type SeasonalityChoice, type TrendChoice } from "./options";
@@ -86,7 +86,8 @@ function better(a: FittedModel, b: FittedModel): boolean {
   const fb = Number.isFinite(b.aicc);
   if (fa && fb) return a.aicc < b.aicc;
   if (fa !== fb) return fa;
-  return a.parameterCount < b.parameterCount;
+  // Too little history for AICc's correction in either: AIC, its large-sample form.
+  return aic(a.sse, a.errorCount, a.parameterCount) < aic(b.sse, b.errorCount, b.parameterCount);
 }
 
 function seasonalityCandidates(y: Float64Array, p: number, choice: SeasonalityChoice): Seasonality[] {

@@ -172,6 +172,21 @@ describe("automatic choice of seasonality and trend", () => {
     expect(chosen.aicc).toBeCloseTo(n * Math.log(chosen.sse / n) + 2 * k + (2 * k * (k + 1)) / (n - k - 1), 9);
   });
 
+  it("falls back on AIC when the history is too short for AICc in every candidate", () => {
+    // 16 quarterly values: 8 one-step errors after the two-season window, fewer than AICc needs
+    const history = [12, 18, 25, 14, 13, 20, 27, 15, 15, 21, 29, 16, 16, 23, 30, 18];
+    const candidates: FittedModel[] = [];
+    for (const seasonality of ["multiplicative", "additive"] as Seasonality[]) {
+      for (const trend of ["damped", "none"] as TrendKind[]) candidates.push(fitModel(history, { period: 4, seasonality, trend }));
+    }
+    for (const m of candidates) expect(Number.isNaN(m.aicc)).toBe(true);
+    // AIC (Akaike 1974): n log(SSE/n) + 2k, k = estimated parameters + 1
+    const aicOf = (m: FittedModel) => m.errorCount * Math.log(m.sse / m.errorCount) + 2 * (m.parameterCount + 1);
+    const best = candidates.reduce((a, b) => (aicOf(b) < aicOf(a) ? b : a));
+    const chosen = fitModel(history, { period: 4, seasonality: "auto", trend: "auto" });
+    expect([chosen.spec.seasonality, chosen.spec.trend]).toEqual([best.spec.seasonality, best.spec.trend]);
+  });
+
   it("auto trend alone compares the damped and the no-trend model under the given seasonality", () => {
     const history = AIR.slice(0, 96);
     const chosen = fitModel(history, { period: P, seasonality: "additive", trend: "auto" });

@@ -1,0 +1,129 @@
+/**
+ * Ebb's benchmark: speed and accuracy on the M3 competition data, side by side with the
+ * bare-loop limit and (with --references) base R and statsmodels, in one run.
+ *
+ *   npm run bench                      full run, writes test/bench/RESULTS.md
+ *   npm run bench -- --quick           ~60 monthly + 40 quarterly series, under a minute (CI)
+ *   npm run bench -- --references      also runs base R HoltWinters and statsmodels
+ *   npm run bench -- --out FILE        write the markdown to FILE instead
+ *
+ * The table goes to standard output, progress to standard error.
+ */
+import { writeFileSync } from "fs";
+import { loadavg } from "os";
+import { join } from "path";
+import { CLASSIC, runAccuracy } from "./accuracy";
+import { measureAhead } from "./ahead";
+import { describeCode, describeMachine } from "./machine";
+import { evenSample, loadM3 } from "./m3";
+import { Progress } from "./progress";
+import { compareSse, scoreReference } from "./referenceScoring";
+import { runReferences } from "./references";
+import { renderReport } from "./report";
+import type { BenchResult } from "./result";
+import { CoverageTally, Scoreboard } from "./scoring";
+import { measureThroughput } from "./throughput";
+import { MemoryWatch, now } from "./timing";
+
+const USAGE = `Usage: npm run bench -- [--quick] [--references] [--out FILE]
+  --quick        a small sample (60 monthly + 40 quarterly series), under a minute; writes no file unless --out
+  --references   also run base R stats::HoltWinters (/usr/bin/Rscript) and statsmodels (/usr/bin/python3)
+  --out FILE     where to write the markdown (default test/bench/RESULTS.md for a full run)`;
+
+interface Args {
+  quick: boolean;
+  references: boolean;
+  out?: string;
+}
+
+function parseArgs(argv: string[]): Args {
+  const args: Args = { quick: false, references: false };
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i];
+    if (a === "--quick") args.quick = true;
+    else if (a === "--references") args.references = true;
+    else if (a === "--out" && i + 1 < argv.length) args.out = argv[++i];
+    else if (a === "--help" || a === "-h") {
+      console.log(USAGE);
+      process.exit(0);
+    } else {
+      console.error(`Unknown option "${a}".\n${USAGE}`);
+      process.exit(2);
+    }
+  }
+  if (!args.quick && !args.out) args.out = join(__dirname, "RESULTS.md");
+  return args;
+}
+
+async function main(): Promise<void> {
+  const args = parseArgs(process.argv.slice(2));
+  const started = now();
+  const loadAtStart = loadavg()[0];
+  const progress = new Progress();
+  const memory = new MemoryWatch();
+  const allMonthly = loadM3("monthly");
+  const allQuarterly = loadM3("quarterly");
+  const monthly = args.quick ? evenSample(allMonthly, 60) : allMonthly;
+  const quarterly = args.quick ? evenSample(allQuarterly, 40) : allQuarterly;
+  const series = [...monthly, ...quarterly];
+
+  progress.note(`throughput: engine vs bare loops (${monthly.length} monthly series)`);
+  const throughput = measureThroughput(monthly, args.quick ? 0.15 : 0.5, args.quick ? 3 : 9);
+  memory.sample();
+
+  const board = new Scoreboard();
+  const coverage = new CoverageTally();
+  const accuracy = runAccuracy(series, board, coverage, progress, memory);
+
+  progress.note("functions layer: one AHEAD call over 1000 series x 120 periods");
+  const ahead = await measureAhead(allMonthly);
+  memory.sample();
+
+  const result: BenchResult = {
+    date: new Date().toISOString().replace("T", " ").slice(0, 16) + " UTC",
+    mode: args.quick ? "quick" : "full",
+    machine: describeMachine(),
+    monthlySeries: monthly.length,
+    quarterlySeries: quarterly.length,
+    throughput,
+    accuracy,
+    board,
+    coverage,
+    referenceNotes: [],
+    ahead,
+    maxRssBytes: 0,
+    peakHeapBytes: 0,
+    elapsedSeconds: 0,
+    codeState: describeCode(),
+    loadAverage: [0, 0],
+  };
+
+  if (args.references) {
+    progress.note("references: base R HoltWinters, then statsmodels ExponentialSmoothing (each times its own fits)");
+    const [r, sm] = runReferences(series);
+    result.references = [scoreReference("r", r, series, board, coverage), scoreReference("sm", sm, series, board, coverage)];
+    for (const run of [r, sm]) if (run.skipped) result.referenceNotes.push(`${run.name} skipped: ${run.skipped}`);
+    if (!r.skipped) {
+      const [mult, add] = CLASSIC.map((m) => accuracy.sse.get(m.key)!);
+      result.sse = compareSse(r, { multiplicative: mult, additive: add });
+    }
+  }
+  if (ahead.seconds === undefined) result.referenceNotes.push(`the EBB.AHEAD row was ${ahead.note}`);
+
+  memory.sample();
+  result.maxRssBytes = memory.maxRssBytes();
+  result.peakHeapBytes = memory.peakHeap;
+  result.elapsedSeconds = now() - started;
+  result.loadAverage = [loadAtStart, loadavg()[0]];
+  const report = renderReport(result);
+  process.stdout.write(report);
+  if (args.out) {
+    writeFileSync(args.out, report);
+    progress.note(`wrote ${args.out}`);
+  }
+}
+
+main().catch((e) => {
+  console.error(`bench failed: ${(e as Error).stack ?? e}`);
+  process.exit(1);
+});
