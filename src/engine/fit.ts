@@ -1,6 +1,5 @@
 import { GradientWorkspace, sseWithGradient } from "./gradient";
-import type { Minimum } from "./optimize/nelderMead";
-import { projectedBfgs } from "./optimize/projectedBfgs";
+import { projectedBfgs, type Minimum } from "./optimize/projectedBfgs";
 import { RecursionWorkspace, sumSquaredErrors } from "./recursion";
 import type { Constants, Seasonality, State, TrendKind } from "./types";
 

@@ -10,7 +10,7 @@ export const CAUTION_TEXT =
   "and follow your organisation's planning and approval rules.";
 
 /**
- * `demo` (what `npm start` runs until the preview exists): the `ahead` command with intervals on
+ * `demo`: the `ahead` command with intervals on
  * the invented Larkmere demo data, printed as a readable table per product.
  */
 export function runDemo(settings: RunSettings): number {

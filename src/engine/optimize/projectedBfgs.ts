@@ -1,4 +1,19 @@
-import type { Minimum } from "./nelderMead";
+/** Where a search ended: the point, its value and how many evaluations it took. */
+export interface Minimum {
+  x: Float64Array;
+  fx: number;
+  evals: number;
+}
+
+export interface ProjectedBfgsOptions {
+  lower: ArrayLike<number>;
+  upper: ArrayLike<number>;
+  maxIter: number;
+  /** Stop when two successive steps each lower f by less than this relative amount. */
+  fTol: number;
+  /** Optional early stop, asked after every accepted step (e.g. "this basin is known"). */
+  abandon?: (x: Float64Array, f: number) => boolean;
+}
 
 /**
  * Bounded quasi-Newton minimisation with exact gradients: BFGS on the variables that are
@@ -8,22 +23,6 @@ import type { Minimum } from "./nelderMead";
  * gradient pushes it against its bound is held there, so corner optima are reached exactly.
  * Deterministic; bounded by maxIter.
  */
-export interface ProjectedBfgsOptions {
-  lower: ArrayLike<number>;
-  upper: ArrayLike<number>;
-  maxIter: number;
-  /** Stop when two successive steps each lower f by less than this relative amount. */
-  fTol: number;
-  /**
-   * Start of the inverse Hessian: "uniform" moves along the raw projected gradient (the
-   * steepest-descent direction of the first step, as classic bounded quasi-Newton codes do);
-   * "diagonal" scales each variable by its own range and gradient.
-   */
-  scaling?: "uniform" | "diagonal";
-  /** Optional early stop, asked after every accepted step (e.g. "this basin is known"). */
-  abandon?: (x: Float64Array, f: number) => boolean;
-}
-
 export function projectedBfgs(
   fg: (x: Float64Array, g: Float64Array) => number,
   x0: ArrayLike<number>,
@@ -37,17 +36,15 @@ export function projectedBfgs(
   let evals = 1;
   if (!Number.isFinite(f)) return { x, fx: Infinity, evals };
   const H = new Float64Array(d * d);
-  // Start of the inverse Hessian. Only the variables not held at a bound set the scale, so a
-  // steep but held coordinate cannot make the steps of the others vanish.
+  // Start of the inverse Hessian: a multiple of the identity, so the first step follows the
+  // projected steepest-descent direction (as classic bounded quasi-Newton codes do). Only the
+  // variables not held at a bound set the scale, so a steep but held coordinate cannot make
+  // the steps of the others vanish.
   const resetH = (): void => {
     H.fill(0);
     let gmax = 0;
     for (let i = 0; i < d; i++) if (!isHeld(i)) gmax = Math.max(gmax, Math.abs(g[i]));
-    for (let i = 0; i < d; i++) {
-      const width = Number.isFinite(o.upper[i] - o.lower[i]) ? o.upper[i] - o.lower[i] : Math.max(1, Math.abs(x[i]));
-      H[i * d + i] =
-        o.scaling === "diagonal" ? (0.1 * width) / Math.max(Math.abs(g[i]), 1e-300) : gmax > 0 ? 0.1 / gmax : 1;
-    }
+    for (let i = 0; i < d; i++) H[i * d + i] = gmax > 0 ? 0.1 / gmax : 1;
   };
   const isHeld = (i: number): boolean => (x[i] <= o.lower[i] && g[i] > 0) || (x[i] >= o.upper[i] && g[i] < 0);
   resetH();
