@@ -1,19 +1,9 @@
-import { holdoutScore } from "../../engine";
+import { holdoutScore, type HoldoutResult } from "../../engine";
 import type { BatchCommand, SeriesEntry } from "./batch";
 import { modelSummary } from "./modelSummary";
 
-export interface BacktestFields {
-  holdout: number;
-  forecast: Float64Array;
-  actual: Float64Array;
-  mad: number;
-  mape: number;
-  smape: number;
-  mase: number;
-  rmse: number;
-  bias: number;
-  coverage: number | null;
-}
+/** The holdout scores as the JSON shows them: no interval arrays or model, coverage null when not asked for. */
+export type BacktestFields = Omit<HoldoutResult, "low" | "high" | "model" | "coverage"> & { coverage: number | null };
 
 /**
  * `backtest`: fit on all but the last --holdout values, forecast them and score the forecasts
