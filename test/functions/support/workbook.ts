@@ -1,6 +1,7 @@
 /** Small helpers to build formula-engine sheets and read spilled results in the workbook tests. */
 import { DetailedCellError, type HyperFormula } from "hyperformula";
 import { createEbbWorkbook } from "../../../src/functions/hyperformula";
+import { columnLetters } from "../../../src/ledger/describe/addresses";
 
 export type Cell = number | string | boolean | null;
 
@@ -45,13 +46,4 @@ export function errorIn(hf: HyperFormula, sheet: number, a1: string): { type: st
 }
 
 /** Column letter(s) of a 0-based column index. */
-export function columnName(index: number): string {
-  let n = index + 1;
-  let s = "";
-  while (n > 0) {
-    const m = (n - 1) % 26;
-    s = String.fromCharCode(65 + m) + s;
-    n = Math.floor((n - 1) / 26);
-  }
-  return s;
-}
+export const columnName = columnLetters;
