@@ -52,7 +52,7 @@ export function parseSeriesCsv(text: string, source = "the input"): CsvSeries {
   }
   if (records.length === 0) throw new CliError(`${source} is empty: it needs a first row of series names and then one row per period.`);
   // A record may span several lines (a quoted cell with a line break): its first line is one after the previous record's last.
-  const firstLine = records.map((r, i) => (i === 0 ? 1 : records[i - 1].info.lines + 1));
+  const firstLine = records.map((_, i) => (i === 0 ? 1 : records[i - 1].info.lines + 1));
   const header = records[0].record;
   if (header.every((h) => isNumberText(h))) {
     throw new CliError(`The first row of ${source} holds numbers; it must hold the series names. Add a row of names at the top.`);

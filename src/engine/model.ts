@@ -131,7 +131,7 @@ export function fitOne(
   if (startMethod === "optimized") {
     const seed = decompositionStart(y, p, seasonality, trend, cycles);
     const guess = fitConstants(y, seed.state, seed.firstUpdate, p, seasonality, trend, fixed).constants;
-    ({ start, constants } = optimizedStart(y, p, seasonality, trend, cycles, fixed, guess));
+    ({ start, constants } = optimizedStart(y, p, seasonality, trend, seed, fixed, guess));
   } else {
     start = startMethod === "classic" ? classicStart(y, p, seasonality, trend) : decompositionStart(y, p, seasonality, trend, cycles);
     constants = fitConstants(y, start.state, start.firstUpdate, p, seasonality, trend, fixed).constants;

@@ -7,7 +7,7 @@ import ExcelJS from "exceljs";
  *    (reading, option handling, alignment, output) without changing a digit;
  *  - DESIGN.md for the JSON shape, option words and the caution text.
  */
-import { existsSync, readFileSync, rmSync } from "fs";
+import { readFileSync, rmSync } from "fs";
 import { join } from "path";
 import {
   fitModel,

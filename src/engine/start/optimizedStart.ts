@@ -2,27 +2,26 @@ import { constantsFrom, freeAxes, type ConstantChoice } from "../fit";
 import { projectedBfgs } from "../optimize/projectedBfgs";
 import { StateGradientWorkspace, sseWithStateGradient } from "../stateGradient";
 import type { Constants, Seasonality, Start, State, TrendKind } from "../types";
-import { decompositionStart } from "./decompositionStart";
 
 /**
  * The `optimized` start: initial level, trend and indices estimated together with the
  * smoothing constants by minimising the sum of squared one-step errors over the whole
  * history (state-space style, Hyndman, Koehler, Ord & Snyder 2008, section 2.6). The search
  * is the bounded quasi-Newton descent with exact gradients, begun from the decomposition
- * start moved back to before the first period, once with the constants fitted on that start
- * and once with the usual starting constants. Indices stay normalised (mean 1 or sum 0), so
- * p-1 of them are free; state variables are searched in units of the series' scale.
+ * start (`seed`, computed by the caller) moved back to before the first period, once with
+ * the constants fitted on that start and once with the usual starting constants. Indices stay
+ * normalised (mean 1 or sum 0), so p-1 of them are free; state variables are searched in
+ * units of the series' scale.
  */
 export function optimizedStart(
   y: Float64Array,
   p: number,
   seasonality: Seasonality,
   trend: TrendKind,
-  cycles: number,
+  seed: Start,
   fixed: ConstantChoice,
   guess: Constants,
 ): { start: Start; constants: Constants; sse: number } {
-  const seed = decompositionStart(y, p, seasonality, trend, cycles);
   const seasonal = seasonality !== "none" && p >= 2;
   const mult = seasonal && seasonality === "multiplicative";
   const slope = seed.detail!.slope;
