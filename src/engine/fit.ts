@@ -2,6 +2,7 @@ import { GradientWorkspace, sseWithGradient } from "./gradient";
 import { projectedBfgs, type Minimum } from "./optimize/projectedBfgs";
 import { RecursionWorkspace, sumSquaredErrors } from "./recursion";
 import type { Constants, Seasonality, State, TrendKind } from "./types";
+import { isSeasonal } from "./shape";
 
 /** Which constants are free, and their fixed values otherwise. */
 export interface ConstantChoice {
@@ -31,7 +32,7 @@ export function freeAxes(seasonality: Seasonality, trend: TrendKind, p: number, 
   const unit = [0.1, 0.5, 0.9];
   if (fixed.alpha === undefined) axes.push({ name: "alpha", slot: 0, lower: 0, upper: 1, grid: unit, usual: 0.3 });
   if (trend !== "none" && fixed.beta === undefined) axes.push({ name: "beta", slot: 1, lower: 0, upper: 1, grid: unit, usual: 0.1 });
-  if (seasonality !== "none" && p >= 2 && fixed.gamma === undefined) {
+  if (isSeasonal(seasonality, p) && fixed.gamma === undefined) {
     axes.push({ name: "gamma", slot: 2, lower: 0, upper: 1, grid: unit, usual: 0.1 });
   }
   if (trend === "damped" && fixed.phi === undefined) {

@@ -1,4 +1,5 @@
 import type { Seasonality, State, TrendKind } from "./types";
+import { isSeasonal } from "./shape";
 
 /**
  * Sum of squared one-step errors and its exact gradient with respect to
@@ -28,7 +29,7 @@ export function sseWithGradient(
   ws: GradientWorkspace,
 ): number {
   const mult = seasonality === "multiplicative" && p >= 2;
-  const seasonal = seasonality !== "none" && p >= 2;
+  const seasonal = isSeasonal(seasonality, p);
   const period = seasonal ? p : 1;
   const ring = ws.ring;
   const dRing = ws.dRing;

@@ -3,7 +3,8 @@ import { badInput } from "./errors";
 import { checkHorizon, forecastModel } from "./model";
 import { trendMultipliers } from "./recursion";
 import { seededNormal } from "./random";
-import type { FittedModel, ModelSpec } from "./types";
+import { estimatedQuantities } from "./shape";
+import type { FittedModel } from "./types";
 
 export interface Interval {
   forecast: Float64Array;
@@ -75,24 +76,13 @@ export function additiveIntervalWeights(model: FittedModel, horizon: number): { 
 }
 
 /**
- * Quantities a model estimates from its history: its smoothing constants (alpha; beta and the
- * start trend with a trend; phi when damped; gamma and p-1 free start indices with seasons)
- * and the start level. Fixed by the model's form, whether the constants were fitted or typed.
- */
-export function estimatedQuantities(spec: ModelSpec): number {
-  const seasonal = spec.seasonality !== "none" && spec.period >= 2;
-  const trend = spec.trend !== "none";
-  return 2 + (trend ? 2 : 0) + (spec.trend === "damped" ? 1 : 0) + (seasonal ? spec.period : 0);
-}
-
-/**
  * Divisor of the error variance: the number of one-step errors less the quantities the model
  * estimates (as the forecast package for R does for its state-space models, Hyndman &
  * Khandakar 2008, J. Stat. Software 27(3)), so that short histories with many parameters do
  * not get intervals that are too narrow. At least 1.
  */
 export function varianceDivisor(model: FittedModel): number {
-  return Math.max(1, model.errorCount - estimatedQuantities(model.spec));
+  return Math.max(1, model.errorCount - estimatedQuantities(model.shape));
 }
 
 const PATHS = 5000;

@@ -8,6 +8,7 @@ import { allPositive, cleanHistory, countPresent, requirePositive } from "./seri
 import { classicStart } from "./start/classicStart";
 import { decompositionStart } from "./start/decompositionStart";
 import { optimizedStart } from "./start/optimizedStart";
+import { isSeasonal, modelShape, parameterCount, requiredLength } from "./shape";
 import type { FittedModel, Seasonality, Start, StartMethod, StateTable, TrendKind } from "./types";
 
 /** What a caller may say about a model; anything left out is detected, fitted or defaulted. */
@@ -91,19 +92,10 @@ function better(a: FittedModel, b: FittedModel): boolean {
 }
 
 function seasonalityCandidates(y: Float64Array, p: number, choice: SeasonalityChoice): Seasonality[] {
-  if (p < 2) return ["none"];
+  if (!isSeasonal("additive", p)) return ["none"];
   if (choice === "auto") return allPositive(y) ? ["multiplicative", "additive"] : ["additive"];
   if (choice === "multiplicative") requirePositive(y);
   return [choice];
-}
-
-/** History needed before a model with this start can be used (fitted or not). */
-export function requiredLength(p: number, seasonality: Seasonality, start: StartMethod, cycles: number, free: number): number {
-  const seasonal = seasonality !== "none" && p >= 2;
-  if (start === "classic") return seasonal ? 2 * p + 1 : 3;
-  const window = seasonal ? cycles * p : Math.max(2, cycles);
-  if (start === "optimized") return Math.max(window, free + (seasonal ? p + 1 : 2) + 2);
-  return window + (free > 0 ? free + 1 : 0);
 }
 
 /** Fit one fully specified model (seasonality and trend known). */
@@ -117,13 +109,14 @@ export function fitOne(
   fixed: ConstantChoice,
 ): FittedModel {
   if (seasonality === "multiplicative") requirePositive(y);
+  const shape = modelShape({ period: p, seasonality, trend, start: startMethod, cycles });
   const free = freeAxes(seasonality, trend, p, fixed).length;
-  const needed = requiredLength(p, seasonality, startMethod, cycles, free);
+  const needed = requiredLength(shape, free);
   if (y.length < needed) {
     const advice =
       startMethod === "classic"
         ? "The classic start uses two full seasons before the first update; add more history."
-        : `${seasonality === "none" ? "The start" : `The start window (${cycles} seasons of ${p})`} comes first${free > 0 ? ", and fitting the constants needs a few periods after it" : ""}; add more history.`;
+        : `${!shape.seasonal ? "The start" : `The start window (${cycles} seasons of ${p})`} comes first${free > 0 ? ", and fitting the constants needs a few periods after it" : ""}; add more history.`;
     throw notEnough(needed, y.length, "values", advice);
   }
   let start: Start;
@@ -137,18 +130,18 @@ export function fitOne(
     constants = fitConstants(y, start.state, start.firstUpdate, p, seasonality, trend, fixed).constants;
   }
   const run = runRecursion(y, start.state, start.firstUpdate, p, seasonality, trend, constants);
-  const seasonal = seasonality !== "none" && p >= 2;
-  const parameterCount = free + 1 + (trend === "none" ? 0 : 1) + (seasonal ? p - 1 : 0);
+  const count = parameterCount(shape, free);
   return {
-    spec: { period: seasonal ? p : 1, seasonality: seasonal ? seasonality : "none", trend, start: startMethod, cycles },
+    spec: shape.spec,
+    shape,
     constants,
     start,
     final: run.final,
     sse: run.sse,
     errorCount: run.errorCount,
     rmse: run.errorCount > 0 ? Math.sqrt(run.sse / run.errorCount) : NaN,
-    aicc: aicc(run.sse, run.errorCount, parameterCount),
-    parameterCount,
+    aicc: aicc(run.sse, run.errorCount, count),
+    parameterCount: count,
     relativeSse: run.relativeSse,
     history: y,
   };

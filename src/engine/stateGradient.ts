@@ -1,4 +1,5 @@
 import type { Seasonality, State, TrendKind } from "./types";
+import { isSeasonal } from "./shape";
 
 /**
  * Sum of squared one-step errors over the whole history (updating from the first period)
@@ -38,7 +39,7 @@ export function sseWithStateGradient(
   ws: StateGradientWorkspace,
 ): number {
   const { m, ring, dRing, dL, dB, db, dn } = ws;
-  const seasonal = seasonality !== "none" && p >= 2;
+  const seasonal = isSeasonal(seasonality, p);
   const mult = seasonal && seasonality === "multiplicative";
   const period = seasonal ? p : 1;
   const hasTrend = trendKind !== "none";

@@ -1,3 +1,5 @@
+import type { ModelShape } from "./shape";
+
 /**
  * Shared vocabulary of the engine. Every other part of Ebb speaks these types.
  * Series are Float64Array with NaN marking a missing period (a blank cell).
@@ -85,6 +87,8 @@ export interface StateTable {
 /** A fitted (or fully specified) model over one history. */
 export interface FittedModel {
   spec: ModelSpec;
+  /** The model's shape: the rules of its form and start (start window, first update, counts). */
+  shape: ModelShape;
   constants: Constants;
   start: Start;
   /** State after the last period of the history. */

@@ -1,6 +1,7 @@
 import { classicalIndices, leastSquaresLine } from "../decompose";
 import { badInput, notEnough } from "../errors";
 import type { Seasonality, Start, TrendKind } from "../types";
+import { modelShape } from "../shape";
 
 /**
  * The start of the classic general-purpose statistical implementation of Holt-Winters
@@ -12,16 +13,17 @@ import type { Seasonality, Start, TrendKind } from "../types";
  * - no seasonality: level = y2, trend = y2 - y1, updating from period 3.
  */
 export function classicStart(y: Float64Array, p: number, seasonality: Seasonality, trend: TrendKind): Start {
-  const seasonal = seasonality !== "none" && p >= 2;
+  const shape = modelShape({ period: p, seasonality, trend, start: "classic" });
+  const seasonal = shape.seasonal;
   if (!seasonal) {
-    if (y.length < 3) throw notEnough(3, y.length);
+    if (y.length < shape.firstUpdate + 1) throw notEnough(shape.firstUpdate + 1, y.length);
     if (Number.isNaN(y[0]) || Number.isNaN(y[1])) {
       throw badInput("start-gap", "The classic start needs the first two values; fill them or use the decomposition start.");
     }
     const slope = trend === "none" ? 0 : y[1] - y[0];
-    return { method: "classic", state: { level: y[1], trend: slope, indices: new Float64Array(0) }, firstUpdate: 2 };
+    return { method: "classic", state: { level: y[1], trend: slope, indices: new Float64Array(0) }, firstUpdate: shape.firstUpdate };
   }
-  const window = 2 * p;
+  const window = shape.startWindow;
   if (y.length < window + 1) throw notEnough(window + 1, y.length);
   for (let t = 0; t < window; t++) {
     if (Number.isNaN(y[t])) {
@@ -36,7 +38,7 @@ export function classicStart(y: Float64Array, p: number, seasonality: Seasonalit
   return {
     method: "classic",
     state: { level: intercept, trend: trend === "none" ? 0 : slope, indices: dec.normal.slice() },
-    firstUpdate: p,
+    firstUpdate: shape.firstUpdate,
     detail: {
       window,
       movingAverage: dec.movingAverage,

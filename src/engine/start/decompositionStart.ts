@@ -1,6 +1,7 @@
 import { classicalIndices, leastSquaresLine } from "../decompose";
 import { badInput, notEnough } from "../errors";
 import type { Seasonality, Start, TrendKind } from "../types";
+import { modelShape } from "../shape";
 
 /**
  * Ebb's default start: classical decomposition over the first `cycles` full seasons.
@@ -21,8 +22,9 @@ export function decompositionStart(
   if (!Number.isInteger(cycles) || cycles < 2) {
     throw badInput("bad-cycles", `The start window needs at least 2 seasons; got ${cycles}. Use 2 or more.`);
   }
-  const seasonal = seasonality !== "none" && p >= 2;
-  const window = seasonal ? cycles * p : Math.max(2, cycles);
+  const shape = modelShape({ period: p, seasonality, trend, start: "decomposition", cycles });
+  const seasonal = shape.seasonal;
+  const window = shape.startWindow;
   if (y.length < window) throw notEnough(window, y.length);
   const w = y.subarray(0, window);
   const x = new Float64Array(window);
@@ -77,5 +79,5 @@ export function decompositionStart(
   base.slope = slope;
   base.adjusted = deseasonalised;
   // Window length is a whole number of seasons, so the next period has position 0.
-  return { method: "decomposition", state: { level, trend: slope, indices }, firstUpdate: window, detail: base };
+  return { method: "decomposition", state: { level, trend: slope, indices }, firstUpdate: shape.firstUpdate, detail: base };
 }

@@ -2,6 +2,7 @@ import { constantsFrom, freeAxes, type ConstantChoice } from "../fit";
 import { projectedBfgs } from "../optimize/projectedBfgs";
 import { StateGradientWorkspace, sseWithStateGradient } from "../stateGradient";
 import type { Constants, Seasonality, Start, State, TrendKind } from "../types";
+import { isSeasonal } from "../shape";
 
 /**
  * The `optimized` start: initial level, trend and indices estimated together with the
@@ -22,7 +23,7 @@ export function optimizedStart(
   fixed: ConstantChoice,
   guess: Constants,
 ): { start: Start; constants: Constants; sse: number } {
-  const seasonal = seasonality !== "none" && p >= 2;
+  const seasonal = isSeasonal(seasonality, p);
   const mult = seasonal && seasonality === "multiplicative";
   const slope = seed.detail!.slope;
   const intercept = seed.detail!.intercept;

@@ -68,10 +68,8 @@ export function engineFigures(history: ArrayLike<number | null | undefined>, set
     gamma: settings.gamma,
     phi: settings.phi,
   });
-  const seasonal = model.spec.seasonality !== "none";
-  const p = seasonal ? model.spec.period : 1;
+  const { seasonal, period: p, startWindow: window } = model.shape;
   const firstUpdate = model.start.firstUpdate;
-  const window = start === "classic" ? (seasonal ? 2 * p : 2) : seasonal ? model.spec.cycles * p : Math.max(2, model.spec.cycles);
   const states = modelStates(model);
   const interval = predictionInterval(model, horizon, coverage);
   const forecast = forecastModel(model, horizon);

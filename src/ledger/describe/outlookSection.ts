@@ -37,7 +37,7 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
   const sigma2 = model.sse / varianceDivisor(model);
   if (!mult) {
     const z = (f.interval.high[0] - f.forecast[0]) / Math.sqrt(sigma2);
-    const lost = estimatedQuantities(model.spec);
+    const lost = estimatedQuantities(model.shape);
     basis.push(["variance", `=SUMSQ(${nm(ctx, "errors")})/MAX(1,COUNT(${nm(ctx, "errors")})-${lost})`, sigma2, FORMAT.units]);
     basis.push(["z", `=NORM.S.INV(0.5+${nm(ctx, "coverage")}/2)`, z, FORMAT.constant]);
   }
