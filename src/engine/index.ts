@@ -12,8 +12,10 @@ export { runRecursion, projectState, trendMultipliers, sumSquaredErrors, Recursi
 export { fitConstants, PHI_LOWER, PHI_UPPER } from "./fit";
 export { aic, aicc } from "./aicc";
 export { fitModel, fitOne, modelStates, forecastModel, resolvePeriod, checkHorizon, type ModelOptions } from "./model";
-export { predictionInterval, additiveIntervalWeights, varianceDivisor, checkCoverage, type Interval } from "./intervals";
+export { predictionInterval, additiveIntervalWeights, varianceDivisor, oneStepVariance, oneStepRelativeSd, checkCoverage, type Interval } from "./intervals";
 export { holdoutScore, rollingBacktest, seasonalNaiveScale, type HoldoutResult, type BacktestRow } from "./backtest";
 export { detectPeriod } from "./period";
 export { acf, seasonalityTest90 } from "./acf";
 export * from "./accuracy";
+export { simulateFuture, SIMULATION_SEED } from "./simulate";
+export * from "./order";

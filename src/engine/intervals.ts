@@ -2,7 +2,7 @@ import normalQuantile from "@stdlib/stats-base-dists-normal-quantile";
 import { badInput } from "./errors";
 import { checkHorizon, forecastModel } from "./model";
 import { trendMultipliers } from "./recursion";
-import { seededNormal } from "./random";
+import { simulateFuture } from "./simulate";
 import { estimatedQuantities } from "./shape";
 import type { FittedModel } from "./types";
 
@@ -39,7 +39,7 @@ export function predictionInterval(model: FittedModel, horizon: number, coverage
   const forecast = forecastModel(model, horizon);
   if (model.spec.seasonality === "multiplicative") return simulated(model, forecast, coverage);
   const { sumSquares } = additiveIntervalWeights(model, horizon);
-  const sigma2 = model.sse / varianceDivisor(model);
+  const sigma2 = oneStepVariance(model);
   const z = normalQuantile(0.5 + coverage / 2, 0, 1);
   const low = new Float64Array(horizon);
   const high = new Float64Array(horizon);
@@ -75,6 +75,16 @@ export function additiveIntervalWeights(model: FittedModel, horizon: number): { 
   return { weight, sumSquares };
 }
 
+/** Variance of the one-step error in the additive (class 1) models: sigma^2 = SSE / varianceDivisor. */
+export function oneStepVariance(model: FittedModel): number {
+  return model.sse / varianceDivisor(model);
+}
+
+/** Standard deviation of the one-step relative error (error / forecast) in multiplicative models. */
+export function oneStepRelativeSd(model: FittedModel): number {
+  return Math.sqrt(model.relativeSse / varianceDivisor(model));
+}
+
 /**
  * Divisor of the error variance: the number of one-step errors less the quantities the model
  * estimates (as the forecast package for R does for its state-space models, Hyndman &
@@ -86,48 +96,24 @@ export function varianceDivisor(model: FittedModel): number {
 }
 
 const PATHS = 5000;
-const SEED = 20260101;
 
 function simulated(model: FittedModel, forecast: Float64Array, coverage: number): Interval {
   const horizon = forecast.length;
-  const p = model.spec.period;
-  const { alpha, beta, gamma } = model.constants;
-  const trendKind = model.spec.trend;
-  const ph = trendKind === "damped" ? model.constants.phi : 1;
-  const sigma = Math.sqrt(model.relativeSse / varianceDivisor(model));
-  const draw = seededNormal(SEED);
-  // All paths advance one step at a time, drawing step by step, so the interval for a
-  // given step does not depend on how many steps were asked for.
-  const level = new Float64Array(PATHS).fill(model.final.level);
-  const trend = new Float64Array(PATHS).fill(trendKind === "none" ? 0 : model.final.trend);
-  const ring = new Float64Array(PATHS * p);
-  for (let path = 0; path < PATHS; path++) ring.set(model.final.indices, path * p);
-  const step = new Float64Array(PATHS);
   const low = new Float64Array(horizon);
   const high = new Float64Array(horizon);
   const q = (1 - coverage) / 2;
-  for (let h = 0; h < horizon; h++) {
-    const pos = h % p;
-    for (let path = 0; path < PATHS; path++) {
-      const at = path * p + pos;
-      const s = ring[at];
-      const base = level[path] + ph * trend[path];
-      const y = base * s * (1 + sigma * draw());
-      const newLevel = alpha * (y / s) + (1 - alpha) * base;
-      const newIndex = gamma * (y / newLevel) + (1 - gamma) * s;
-      if (trendKind !== "none") trend[path] = beta * (newLevel - level[path]) + (1 - beta) * ph * trend[path];
-      level[path] = newLevel;
-      ring[at] = Number.isFinite(newIndex) ? newIndex : s;
-      step[path] = y;
-    }
+  simulateFuture(model, oneStepRelativeSd(model), horizon, PATHS, (h, step) => {
     step.sort();
-    low[h] = quantileSorted(step, q);
-    high[h] = quantileSorted(step, 1 - q);
-    if (!Number.isFinite(low[h]) || !Number.isFinite(high[h])) {
-      throw badInput("interval-breakdown", "The simulated interval broke down (the level reached zero); use additive seasonality for this series.");
-    }
-  }
+    low[h - 1] = quantileSorted(step, q);
+    high[h - 1] = quantileSorted(step, 1 - q);
+    if (!Number.isFinite(low[h - 1]) || !Number.isFinite(high[h - 1])) throw simulationBreakdown("interval");
+  });
   return { forecast, low, high };
+}
+
+/** The error for a simulated figure that broke down (a path's level reached zero). */
+export function simulationBreakdown(what: string): Error {
+  return badInput(`${what.replace(/ /g, "-")}-breakdown`, `The simulated ${what} broke down (the level reached zero); use additive seasonality for this series.`);
 }
 
 /** Linear interpolation between order statistics (Hyndman & Fan 1996, type 7). */
