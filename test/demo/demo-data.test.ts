@@ -1,6 +1,7 @@
 import { readFileSync } from "fs";
 import {
   DEMO_CSV_PATH,
+  DEMO_EVENTS,
   DEMO_MISSING_MONTHS,
   DEMO_NOTICE,
   demoCsv,
@@ -110,5 +111,26 @@ describe("Larkmere demo data (invented)", () => {
       return Math.max(...year) - Math.min(...year);
     };
     expect(range(6)).toBeGreaterThan(3 * range(0));
+  });
+});
+
+describe("the invented promotion and stock-out", () => {
+  const data = generateDemo();
+  it("are labelled invented, in one product, inside the update window, with the reason a planner types", () => {
+    expect(new Set(DEMO_EVENTS.map((e) => e.product)).size).toBe(1);
+    expect(DEMO_EVENTS.map((e) => e.kind).sort()).toEqual(["promotion", "stock-out"]);
+    for (const e of DEMO_EVENTS) {
+      expect(e.reason).toMatch(/\(invented\)$/);
+      expect(data.months.indexOf(e.month)).toBeGreaterThanOrEqual(24); // after the two-season start window
+    }
+  });
+  it("distort their month: the promoted month is that product's highest of its calendar month, the stock-out its lowest", () => {
+    const hose = data.products.find((p) => p.name === DEMO_EVENTS[0].product)!;
+    for (const e of DEMO_EVENTS) {
+      const month = e.month.slice(5);
+      const same = data.months.flatMap((m, t) => (m.endsWith(`-${month}`) ? [hose.values[t]!] : []));
+      const v = hose.values[data.months.indexOf(e.month)]!;
+      expect(v).toBe(e.kind === "promotion" ? Math.max(...same) : Math.min(...same));
+    }
   });
 });

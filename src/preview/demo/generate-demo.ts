@@ -56,7 +56,41 @@ interface Recipe {
   yearShock: number;
   /** Months ("YYYY-MM") with no recorded figure. */
   missing?: string[];
+  /** Months whose sales did not show normal demand (a promotion, a stock-out). */
+  events?: readonly DemoEvent[];
 }
+
+/** A month whose recorded sales were distorted: sales = normal demand x factor. */
+export interface DemoEvent {
+  product: string;
+  month: string;
+  factor: number;
+  kind: "promotion" | "stock-out";
+  /** What the planner types as the reason beside the correction. */
+  reason: string;
+}
+
+/**
+ * The invented distortions in the demo: a spring promotion and a summer stock-out of hose reels.
+ * The promoted month sold well above normal demand (and pulled the March index up for the next
+ * year); in the stock-out month only part of the demand could be served.
+ */
+export const DEMO_EVENTS: readonly DemoEvent[] = [
+  {
+    product: "Hose reels (units)",
+    month: "2024-03",
+    factor: 1.8,
+    kind: "promotion",
+    reason: "Spring promotion: 20% off hose reels for the whole month (invented)",
+  },
+  {
+    product: "Hose reels (units)",
+    month: "2025-06",
+    factor: 0.45,
+    kind: "stock-out",
+    reason: "Stock-out: supplier delivery three weeks late, orders turned away (invented)",
+  },
+];
 
 /** Months lost to the (invented) stock-system outage; blank cells in the flower bulbs column. */
 export const DEMO_MISSING_MONTHS: readonly string[] = ["2023-05", "2023-06", "2023-07"];
@@ -81,6 +115,7 @@ const RECIPES: Recipe[] = [
     shape: [0.3, 0.35, 0.6, 1.0, 1.6, 2.1, 1.8, 1.3, 0.75, 0.5, 0.35, 0.3],
     noise: 0.07,
     yearShock: 0.05,
+    events: DEMO_EVENTS.filter((e) => e.product === "Hose reels (units)"),
   },
   {
     // Winter item, sold all year: a steady base plus a fixed winter swing, so it looks additive.
@@ -175,6 +210,7 @@ export function generateDemo(): DemoData {
   const products: DemoProduct[] = RECIPES.map((r) => {
     const shape = normalisedShape(r);
     const missing = new Set(r.missing ?? []);
+    const events = new Map((r.events ?? []).map((e) => [e.month, e.factor]));
     const values: (number | null)[] = [];
     let shock = 0;
     months.forEach((month, t) => {
@@ -190,6 +226,7 @@ export function generateDemo(): DemoData {
         const level = r.level + r.growth * years;
         v = level + shape[m] + shock + r.noise * z;
       }
+      v *= events.get(month) ?? 1;
       values.push(missing.has(month) ? null : Math.max(1, Math.round(v)));
     });
     return { name: r.name, values };
