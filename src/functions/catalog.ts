@@ -8,6 +8,8 @@
 import { accuracyFn, biasFn, madFn, mapeFn, maseFn, mseFn, rmseFn, smapeFn, theilUFn, trackingFn } from "./accuracy";
 import type { Output } from "./cells";
 import { aheadFn, backtestFn, bandFn, fitFn, fittedFn, statesFn } from "./model";
+import { OPTION_WORDS_HELP } from "./optionWords";
+import { bufferFn, correctedFn, unusualFn } from "./order";
 import { indicesFn, initFn, periodFn } from "./start";
 import { projectFn, stepFn } from "./state";
 
@@ -313,6 +315,61 @@ export const CATALOG: FunctionSpec[] = [
     result: "matrix",
     size: (a) => ({ rows: arg(a, 2).omitted ? 8 : 9, cols: 2 }),
     run: accuracyFn as FunctionSpec["run"],
+  },
+  {
+    name: "CORRECTED",
+    description:
+      "The history with each non-blank correction used in place of its actual (same size as the history); nest it in any function that takes a history. The actuals stay as typed.",
+    params: [
+      HISTORY,
+      {
+        name: "corrections",
+        kind: "range",
+        help: "Corrected values beside the actuals, the same size as history: a number replaces the actual in its row, a blank keeps the actual.",
+      },
+    ],
+    result: "matrix",
+    size: (a) => ({ rows: arg(a, 0).rows, cols: arg(a, 0).cols }),
+    run: correctedFn as FunctionSpec["run"],
+  },
+  {
+    name: "UNUSUAL",
+    description:
+      'Periods whose one-step error is unusually large for the automatic model: a flag ("high" or "low") and a suggested replacement (the one-step forecast), two columns per series. It suggests; it never changes the history.',
+    params: [
+      HISTORY,
+      PERIOD,
+      {
+        name: "threshold",
+        kind: "value",
+        optional: true,
+        help: "How many robust standard deviations (1.4826 x the median absolute deviation of the one-step errors) count as unusual; default 4.",
+      },
+    ],
+    result: "matrix",
+    size: perSeries((a) => seriesLength(arg(a, 0)), 2),
+    run: unusualFn as FunctionSpec["run"],
+  },
+  {
+    name: "BUFFER",
+    description:
+      "Safety stock from the model's own error growth, per series: demand forecast over the lead time (plus review period), the standard deviation of its error, the safety stock and the reorder point (four rows, one column per series). Review stock levels against supplier terms, shelf life and your own policy.",
+    params: [
+      HISTORY,
+      PERIOD,
+      { name: "lead_time", kind: "value", help: "Periods from placing an order to receiving it, a whole number such as 3." },
+      { name: "service_level", kind: "value", help: "Cycle service level: the chance of no stock-out before the order arrives, such as 0.95." },
+      {
+        name: "review_period",
+        kind: "value",
+        optional: true,
+        help: "Periods between stock reviews (0 or blank: continuous review). With a review period the last row is the order-up-to level.",
+      },
+      { name: "options", kind: "word", optional: true, help: OPTION_WORDS_HELP },
+    ],
+    result: "matrix",
+    size: perSeries(() => 4, 1),
+    run: bufferFn as FunctionSpec["run"],
   },
 ];
 

@@ -265,3 +265,38 @@ export function tracking(actual: any[][], forecast: any[][]): any[][] {
 export function accuracy(actual: any[][], forecast: any[][], history?: any[][], period?: any): any[][] {
   return callHost("ACCURACY", [actual, forecast, history, period]);
 }
+
+/**
+ * The history with each non-blank correction used in place of its actual (same size as the history); nest it in any function that takes a history. The actuals stay as typed.
+ * @customfunction CORRECTED
+ * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
+ * @param corrections Corrected values beside the actuals, the same size as history: a number replaces the actual in its row, a blank keeps the actual.
+ */
+export function corrected(history: any[][], corrections: any[][]): any[][] {
+  return callHost("CORRECTED", [history, corrections]);
+}
+
+/**
+ * Periods whose one-step error is unusually large for the automatic model: a flag ("high" or "low") and a suggested replacement (the one-step forecast), two columns per series. It suggests; it never changes the history.
+ * @customfunction UNUSUAL
+ * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
+ * @param period Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.
+ * @param threshold How many robust standard deviations (1.4826 x the median absolute deviation of the one-step errors) count as unusual; default 4.
+ */
+export function unusual(history: any[][], period: any, threshold?: any): any[][] {
+  return callHost("UNUSUAL", [history, period, threshold]);
+}
+
+/**
+ * Safety stock from the model's own error growth, per series: demand forecast over the lead time (plus review period), the standard deviation of its error, the safety stock and the reorder point (four rows, one column per series). Review stock levels against supplier terms, shelf life and your own policy.
+ * @customfunction BUFFER
+ * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
+ * @param period Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.
+ * @param lead_time Periods from placing an order to receiving it, a whole number such as 3.
+ * @param service_level Cycle service level: the chance of no stock-out before the order arrives, such as 0.95.
+ * @param review_period Periods between stock reviews (0 or blank: continuous review). With a review period the last row is the order-up-to level.
+ * @param options Model settings as plain words in any order: multiplicative or additive; linear, damped or none; decomposition, classic or optimized; "auto" chooses seasonality and trend. Blank: multiplicative linear, as in EBB.AHEAD.
+ */
+export function buffer(history: any[][], period: any, lead_time: any, service_level: any, review_period?: any, options?: string): any[][] {
+  return callHost("BUFFER", [history, period, lead_time, service_level, review_period, options]);
+}

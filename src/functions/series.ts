@@ -12,18 +12,18 @@ import { asEbbError } from "./failures";
 /**
  * @param inputs the series of a range (or the error that stopped one of them)
  * @param width output columns per series
- * @param compute one series' output block (`width` columns)
+ * @param compute one series' output block (`width` columns), given the series and its place in the range
  */
-export function eachSeries(inputs: (SeriesInput | EbbError)[], width: number, compute: (s: SeriesInput) => Block): Block {
+export function eachSeries(inputs: (SeriesInput | EbbError)[], width: number, compute: (s: SeriesInput, index: number) => Block): Block {
   if (inputs.length === 1) {
     const only = inputs[0];
     if (only instanceof EbbError) throw only;
-    return compute(only);
+    return compute(only, 0);
   }
-  const results: (Block | EbbError)[] = inputs.map((s) => {
+  const results: (Block | EbbError)[] = inputs.map((s, i) => {
     if (s instanceof EbbError) return s;
     try {
-      return compute(s);
+      return compute(s, i);
     } catch (e) {
       return asEbbError(e);
     }
