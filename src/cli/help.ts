@@ -84,6 +84,30 @@ Example:
   ${RUN} backtest sales.csv --period 12 --holdout 12 --coverage 0.9
 `;
 
+export const BUFFER_HELP = `${INPUT}
+
+Safety stock from the model's own error growth. Per series: the demand forecast over the lead
+time plus the review period, the standard deviation of its error (every h-step variance and
+covariance over those periods, as the prediction intervals compute them), the safety stock
+z x sd for the cycle service level, and the reorder point (demand + safety stock; with a
+review period, the order-up-to level). shortcut_sd, the one-step sd x sqrt(periods), is shown
+for comparison only; it understates the spread whenever the model learns from new errors.
+Output, --format json: {"series": [{...}, ...], "caution": "..."}, one entry per column, with
+  ${MODEL_FIELDS},
+  buffer: {lead_time, review_period, service_level, periods, demand, sd, shortcut_sd, method,
+           z, safety_stock, reorder_point}
+method is "analytic" (additive or no seasonality) or "simulated" (multiplicative, seeded).
+${MODEL_NOTES}
+Output, --format csv: one row per series with columns
+  series, lead_time, review_period, service_level, demand, sd, shortcut_sd, safety_stock,
+  reorder_point, method, message
+The caution below is also written to standard error on every run: stock levels must be
+reviewed against supplier terms, shelf life and your organisation's own policy.
+
+Example:
+  ${RUN} buffer sales.csv --period 12 --seasonality auto --trend auto --lead-time 3 --service-level 0.95
+`;
+
 export const LEDGER_HELP = `${INPUT}
 
 Writes an .xlsx workbook (--out, required) with the data and one update ledger per series:

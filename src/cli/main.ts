@@ -1,6 +1,6 @@
 /**
  * Ebb's batch command: the engine over CSV files of many series.
- *   npm run --silent ebb -- <fit|states|ahead|backtest|ledger|demo> <file.csv|-> [options]
+ *   npm run --silent ebb -- <fit|states|ahead|backtest|buffer|ledger|demo> <file.csv|-> [options]
  * Parsing only: the work is in commands/, the mathematics in the engine.
  */
 import { Command } from "commander";
@@ -8,12 +8,13 @@ import { EbbError } from "../engine";
 import { CliError } from "./cliError";
 import { aheadCommand } from "./commands/ahead";
 import { backtestCommand } from "./commands/backtest";
+import { DEFAULT_SERVICE_LEVEL, runBuffer, type BufferOptions } from "./commands/buffer";
 import { runBatch, type BatchCommand } from "./commands/batch";
 import { runDemo } from "./commands/demo";
 import { fitCommand } from "./commands/fit";
 import { runLedger } from "./commands/ledger";
 import { statesCommand } from "./commands/states";
-import { AHEAD_HELP, BACKTEST_HELP, DEMO_HELP, FIT_HELP, LEDGER_HELP, PROGRAM_HELP, STATES_HELP } from "./help";
+import { AHEAD_HELP, BACKTEST_HELP, BUFFER_HELP, DEMO_HELP, FIT_HELP, LEDGER_HELP, PROGRAM_HELP, STATES_HELP } from "./help";
 import { DEFAULT_HOLDOUT, DEFAULT_HORIZON, toRunSettings, type RawOptions } from "./options";
 
 type Extra = "horizon" | "coverage" | "holdout" | "output" | "out";
@@ -71,6 +72,14 @@ export function buildProgram(): Command {
   batch(program, "states", "per series: one row per period (level, trend, index, forecast, error)", STATES_HELP, statesCommand, []);
   batch(program, "ahead", "per series: the next --horizon forecasts, with low/high when --coverage is given", AHEAD_HELP, aheadCommand, ["horizon", "coverage"]);
   batch(program, "backtest", "per series and overall: accuracy on the last --holdout values, fitted on the rest", BACKTEST_HELP, backtestCommand, ["holdout", "coverage"]);
+
+  const buffer = program.command("buffer").description("per series: lead-time demand, its error's standard deviation, safety stock, reorder point").argument("<file>", "CSV file of series, or - for standard input");
+  modelOptions(buffer, ["output"])
+    .option("--lead-time <L>", "periods from placing an order to receiving it (required)")
+    .option("--service-level <S>", `cycle service level, such as 0.95 (default: ${DEFAULT_SERVICE_LEVEL})`)
+    .option("--review-period <R>", "periods between stock reviews; 0 for continuous review (default: 0)")
+    .addHelpText("after", BUFFER_HELP);
+  buffer.action((file: string, raw: RawOptions & BufferOptions) => guarded(() => runBuffer(file, toRunSettings(raw), raw)));
 
   const ledger = program.command("ledger").description("an .xlsx workbook (--out) with the data and one ledger per series").argument("<file>", "CSV file of series, or - for standard input");
   modelOptions(ledger, ["horizon", "coverage", "out"]).addHelpText("after", LEDGER_HELP);
