@@ -2,14 +2,16 @@
  * EBB.FIT, EBB.STATES, EBB.FITTED, EBB.AHEAD, EBB.BAND and EBB.BACKTEST: the functions that fit
  * a model to each series of a history and report on it.
  */
-import { fitModel, forecastModel, modelStates, predictionInterval, rollingBacktest, type FittedModel, type ModelOptions } from "../engine";
+import { forecastModel, modelStates, predictionInterval, rollingBacktest, type FittedModel, type ModelOptions } from "../engine";
 import { coverageArg, horizonArg, modelOptionsArg } from "./arguments";
 import { type Block, column, finiteNumber, optionalNumber } from "./cells";
 import { optionalNumberArg, readSeries, type SeriesInput } from "./coerce";
+import { cachedDerived, cachedFit } from "./modelCache";
 import { eachSeries } from "./series";
 
+/** The fit of one series, shared through the model cache by every function over the same values. */
 function fit(s: SeriesInput, options: ModelOptions): FittedModel {
-  return fitModel(s.values, options);
+  return cachedFit(s.values, options);
 }
 
 /** EBB.FIT: per series the seasonality and trend used, alpha, beta, gamma, phi, SSE, RMSE, AICc. */
@@ -48,7 +50,7 @@ interface StatesArgs {
 function statesBlock(a: StatesArgs, width: number, row: (t: ReturnType<typeof modelStates>, i: number) => Block[number]): Block {
   const options = modelOptionsArg(a);
   return eachSeries(readSeries(a.history, "history"), width, (s) => {
-    const table = modelStates(fit(s, options));
+    const table = cachedDerived(s.values, options, "states", modelStates, (t) => 5 * t.level.length);
     return Array.from({ length: table.level.length }, (_, i) => row(table, i));
   });
 }
@@ -116,7 +118,7 @@ export function bandFn(history: unknown, period: unknown, horizon: unknown, cove
   const h = horizonArg(horizon);
   const c = coverageArg(coverage);
   return eachSeries(readSeries(history, "history"), 2, (s) => {
-    const band = predictionInterval(fit(s, options), h, c);
+    const band = cachedDerived(s.values, options, `band|${h}|${c}`, (m) => predictionInterval(m, h, c), () => 3 * h);
     return Array.from({ length: h }, (_, i) => [finiteNumber(band.low[i], "interval low"), finiteNumber(band.high[i], "interval high")]);
   });
 }

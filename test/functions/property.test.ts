@@ -12,6 +12,7 @@ import { CATALOG, type FunctionSpec, type ParamSpec } from "../../src/functions/
 import { InputError } from "../../src/functions/cells";
 import { callHost } from "../../src/functions/host";
 import { invoke } from "../../src/functions/invoke";
+import { setModelCache } from "../../src/functions/modelCache";
 import { FakeHostError, installFakeCustomFunctions } from "./support/fakeCustomFunctions";
 import { columnName, workbook } from "./support/workbook";
 
@@ -117,6 +118,21 @@ describe.each(CATALOG.map((spec) => [spec.name, spec] as const))("EBB.%s with ra
         else outcome.value.forEach((row) => row.forEach(checkCell));
       }),
       { numRuns: RUNS, seed: 20260101 },
+    );
+  });
+
+  test("the model cache changes nothing: uncached, first cached and repeated cached outcomes are equal", () => {
+    fc.assert(
+      fc.property(argsFor(spec), (args) => {
+        setModelCache(false);
+        const uncached = invoke(spec, args);
+        setModelCache(true);
+        const first = invoke(spec, args);
+        const again = invoke(spec, args);
+        expect(first).toEqual(uncached);
+        expect(again).toEqual(uncached);
+      }),
+      { numRuns: RUNS, seed: 20260102 },
     );
   });
 
