@@ -198,7 +198,7 @@ export const OUTLOOK_COLUMNS = {
   half: { label: "Half width", note: "z for coverage x square root of (error variance x (1 + sum of squared weights)). Hyndman, Koehler, Ord & Snyder (2008), ch. 6." },
   gapBelow: {
     label: "Gap below",
-    note: "Forecast minus the low end of the engine's seeded simulation of 5000 futures (multiplicative seasonality has no exact formula). A number, not a formula: Fit and Verify refresh it.",
+    note: "Forecast minus the low end of the engine's seeded simulation of 2000 futures (multiplicative seasonality has no exact formula). A number, not a formula: Fit and Verify refresh it.",
   },
   gapAbove: { label: "Gap above", note: "High end of the engine's seeded simulation minus the forecast. A number, not a formula: Fit and Verify refresh it." },
   lowAdd: { label: "Low", note: "Forecast - half width." },
