@@ -1,6 +1,15 @@
-import { checkConstant, checkCoverage, checkHorizon, checkPeriod, EbbError, parseSeasonality, parseStart, parseTrend, type ModelOptions } from "../engine";
-import { isNumberText } from "./readCsv";
+import { availableParallelism } from "os";
+import { checkConstant, checkHorizon, checkPeriod, EbbError, parseCoverage, parseSeasonality, parseStart, parseTrend, type ModelOptions } from "../engine";
 import { CliError } from "./cliError";
+import { parseDecimal, parseDelimiter } from "./input/dialect";
+import type { ReadOptions } from "./input/readSeries";
+
+/** Plain decimal numbers only: no hex, no "Infinity", no thousands separators (numbers typed as options). */
+const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+
+export function isNumberText(s: string): boolean {
+  return DECIMAL.test(s);
+}
 
 /** Options as commander hands them over: the text the user typed. */
 export interface RawOptions {
@@ -19,7 +28,16 @@ export interface RawOptions {
   format?: string;
   out?: string;
   progress?: boolean;
+  force?: boolean;
+  workers?: string;
+  delimiter?: string;
+  decimal?: string;
+  labels?: string;
+  [own: string]: unknown;
 }
+
+/** Shared options a command may take beyond the model options. */
+export type OptionGroup = "horizon" | "coverage" | "holdout";
 
 export type OutputFormat = "json" | "csv";
 export const FORMAT_WORDS: readonly OutputFormat[] = ["json", "csv"];
@@ -33,6 +51,13 @@ export interface RunSettings {
   format: OutputFormat;
   out?: string;
   progress: boolean;
+  /** Replace an existing --out file. */
+  force: boolean;
+  /** Worker threads; undefined means every core for a large file. */
+  workers?: number;
+  read: ReadOptions;
+  /** A command's own options (BatchCommand.readOptions). */
+  extra: Record<string, unknown>;
 }
 
 export const DEFAULT_HORIZON = 12;
@@ -61,9 +86,33 @@ export function toRunSettings(raw: RawOptions, defaults: Defaults = {}): RunSett
   };
   const horizon = flag("--horizon", () => checkHorizon(number("--horizon", raw.horizon) ?? DEFAULT_HORIZON));
   const typedCoverage = number("--coverage", raw.coverage) ?? defaults.coverage;
-  const coverage = typedCoverage === undefined ? undefined : flag("--coverage", () => checkCoverage(typedCoverage));
+  const coverage = typedCoverage === undefined ? undefined : flag("--coverage", () => parseCoverage(typedCoverage));
   const holdout = checkHoldout(number("--holdout", raw.holdout));
-  return { model, horizon, coverage, holdout, format: parseFormat(raw.format), out: raw.out, progress: raw.progress === true };
+  const read: ReadOptions = { delimiter: parseDelimiter(raw.delimiter), decimal: parseDecimal(raw.decimal), labels: raw.labels };
+  return {
+    model,
+    horizon,
+    coverage,
+    holdout,
+    format: parseFormat(raw.format),
+    out: raw.out,
+    progress: raw.progress === true,
+    force: raw.force === true,
+    workers: checkWorkers(number("--workers", raw.workers)),
+    read,
+    extra: {},
+  };
+}
+
+/** Most worker threads accepted: a few per core is already more than helps. */
+export const MAX_WORKERS = Math.max(4, availableParallelism() * 4);
+
+function checkWorkers(v: number | undefined): number | undefined {
+  if (v === undefined) return undefined;
+  if (!Number.isInteger(v) || v < 1 || v > MAX_WORKERS) {
+    throw new CliError(`--workers: give a whole number of worker threads from 1 to ${MAX_WORKERS} (1 runs every series on the main thread); got ${v}.`);
+  }
+  return v;
 }
 
 function parseFormat(v: string | undefined): OutputFormat {
@@ -79,7 +128,7 @@ function parseFormat(v: string | undefined): OutputFormat {
 function number(name: string, text: string | undefined): number | undefined {
   if (text === undefined) return undefined;
   const s = text.trim();
-  if (!isNumberText(s)) throw new CliError(`${name} expects a number; got "${text}".`);
+  if (!DECIMAL.test(s)) throw new CliError(`${name} expects a number; got "${text}".`);
   return Number(s);
 }
 

@@ -1,40 +1,41 @@
-import { writeFileSync } from "fs";
-import { CliError } from "./cliError";
-
 /**
- * JSON text. Typed arrays become plain arrays; NaN and Infinity become null (JSON.stringify's
- * own rule), so a blank or undefined value never shows as a number.
+ * Text of the results: JSON values and CSV lines. Typed arrays become plain arrays; NaN and
+ * Infinity become null in JSON (JSON.stringify's own rule) and empty cells in CSV, so a blank
+ * or undefined value never shows as a number.
  */
-export function toJson(doc: unknown): string {
-  return JSON.stringify(doc, (_key, value) => (ArrayBuffer.isView(value) ? Array.from(value as Float64Array) : value), 2) + "\n";
+
+const replacer = (_key: string, value: unknown) => (ArrayBuffer.isView(value) ? Array.from(value as Float64Array) : value);
+
+/** A JSON value, pretty-printed, every line after the first indented by `indent`. */
+export function jsonText(value: unknown, indent = ""): string {
+  const text = JSON.stringify(value, replacer, 2);
+  return indent === "" ? text : text.replace(/\n/g, `\n${indent}`);
 }
 
-/** A tidy CSV table: the given columns in order, empty cells for missing, NaN or absent values. */
-export function toCsv(columns: readonly string[], rows: Record<string, unknown>[]): string {
-  const lines = [columns.map(csvField).join(",")];
-  for (const row of rows) lines.push(columns.map((c) => csvField(cellText(row[c]))).join(","));
-  return lines.join("\n") + "\n";
+/** One line of a tidy CSV table: the given columns in order, empty cells for missing, NaN or absent values. */
+export function csvLine(columns: readonly string[], row: Record<string, unknown>): string {
+  return columns.map((c) => csvCell(row[c])).join(",") + "\n";
 }
 
-function cellText(v: unknown): string {
+export function csvHeader(columns: readonly string[]): string {
+  return columns.map((c) => quoteField(c)).join(",") + "\n";
+}
+
+function csvCell(v: unknown): string {
   if (v === undefined || v === null) return "";
   if (typeof v === "number") return Number.isFinite(v) ? String(v) : "";
-  return String(v);
+  return quoteField(guardFormula(String(v)));
 }
 
-function csvField(s: string): string {
+/**
+ * Text that a spreadsheet would run as a formula when it opens the file (=, +, -, @, or a tab
+ * or carriage return in front of one) gets a leading apostrophe: the usual CSV-injection guard.
+ * Numbers are written as numbers and never changed.
+ */
+export function guardFormula(s: string): string {
+  return /^[=+\-@\t\r]/.test(s) ? `'${s}` : s;
+}
+
+function quoteField(s: string): string {
   return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
-}
-
-/** Write the result to --out, or to standard output. */
-export function emit(text: string, out?: string): void {
-  if (out === undefined) {
-    process.stdout.write(text);
-    return;
-  }
-  try {
-    writeFileSync(out, text, "utf8");
-  } catch (e) {
-    throw new CliError(`Cannot write "${out}": ${(e as Error).message}`);
-  }
 }

@@ -45,3 +45,19 @@ export function checkPeriod(v: number | undefined): number {
   }
   return v;
 }
+
+/** The two ways coverage is written, for messages: say which form a field expects. */
+export const COVERAGE_FORMS = "a fraction between 0 and 1 (such as 0.95) or a percentage between 1 and 100 (such as 95)";
+
+/**
+ * Interval coverage as typed anywhere (batch command, worksheet functions, panel, ledger):
+ * a fraction such as 0.95, or a percentage such as 95 (a number above 1 and below 100 is read
+ * as a percentage). Returns the fraction. 1 and 100 are refused: a 100% interval is unbounded.
+ */
+export function parseCoverage(v: number): number {
+  if (typeof v === "number" && Number.isFinite(v)) {
+    if (v > 0 && v < 1) return v;
+    if (v > 1 && v < 100) return v / 100;
+  }
+  throw badInput("bad-coverage", `Coverage must be ${COVERAGE_FORMS}; got ${String(v)}.`);
+}

@@ -5,9 +5,9 @@
 import {
   badInput,
   checkConstant,
-  checkCoverage,
   checkHorizon,
   checkPeriod,
+  parseCoverage,
   parseSeasonality,
   parseStart,
   parseTrend,
@@ -26,9 +26,9 @@ export function horizonArg(v: unknown): number {
   return checkHorizon(requiredNumberArg(v, "horizon", "Type how many periods ahead to forecast, for example 12."));
 }
 
-/** Interval coverage, a fraction such as 0.95 (the default). */
+/** Interval coverage, a fraction such as 0.95 (the default) or a percentage such as 95. */
 export function coverageArg(v: unknown): number {
-  return checkCoverage(optionalNumberArg(v, "coverage") ?? 0.95);
+  return parseCoverage(optionalNumberArg(v, "coverage") ?? 0.95);
 }
 
 export function seasonalityArg(v: unknown): SeasonalityChoice {

@@ -114,7 +114,7 @@ describe("states", () => {
 });
 
 describe("ahead", () => {
-  it("skips a label column and gives low/high with --coverage (source: the engine)", () => {
+  it("skips a label column, gives low/high with --coverage and the months forecast (source: the engine; months: the calendar)", () => {
     const months = air.map((_, i) => `${1949 + Math.floor(i / 12)}-${String((i % 12) + 1).padStart(2, "0")}`);
     const file = writeCsv(dir, "labelled.csv", ["month", "AirPassengers"], [months, air]);
     const r = runEbb(["ahead", file, "--period", "12", "--horizon", "5", "--coverage", "0.8", "--trend", "damped"]);
@@ -125,7 +125,9 @@ describe("ahead", () => {
     expect(Object.keys(entry)).toEqual([...MODEL_KEYS, "ahead"]);
     const model = fitModel(air, { period: 12, trend: "damped", seasonality: "multiplicative", start: "decomposition" });
     const band = predictionInterval(model, 5, 0.8);
-    expect(entry.ahead).toEqual(Array.from(band.forecast, (f, i) => ({ h: i + 1, forecast: f, low: band.low[i], high: band.high[i] })));
+    // The data end in 1960-12 (1949-01 plus 143 months).
+    const next = ["1961-01", "1961-02", "1961-03", "1961-04", "1961-05"];
+    expect(entry.ahead).toEqual(Array.from(band.forecast, (f, i) => ({ h: i + 1, label: next[i], forecast: f, low: band.low[i], high: band.high[i] })));
   });
 
   it("reads standard input and writes the tidy CSV table, without low/high when no coverage (source: the engine)", () => {
@@ -151,7 +153,8 @@ describe("backtest", () => {
     const short = [5, 6, 7];
     const file = writeCsv(dir, "three.csv", ["AirPassengers", "Too short", "UKgas"], [air, short, ukgas]);
     const r = runEbb(["backtest", file, "--period", "0", "--holdout", "6", "--coverage", "0.9"]);
-    expect(r.status).toBe(0);
+    // Exit status 2: some series failed, the others were written.
+    expect(r.status).toBe(2);
     expect(r.stderr).toMatch(/warning: series "Too short" failed/);
     expect(r.stderr).not.toMatch(/AirPassengers|UKgas/);
     const doc = JSON.parse(r.stdout);
@@ -180,13 +183,15 @@ describe("backtest", () => {
 });
 
 describe("bad input", () => {
-  it("stops on a cell that is not a number, naming the series and the row, on standard error", () => {
-    const file = writeCsv(dir, "bad.csv", ["month", "North", "South"], [["2020-01", "2020-02", "2020-03"], [1, 2, 3], [4, "n/a", 6]]);
-    const r = runEbb(["fit", file]);
-    expect(r.status).not.toBe(0);
-    expect(r.stdout).toBe("");
-    // "n/a" is in the second data row, line 3 of the file (line 1 holds the names).
-    expect(r.stderr).toMatch(/Series "South", row 3 of .*bad\.csv: "n\/a" is not a number/);
+  it("reports a cell that is not a number by its address and still runs the other series", () => {
+    const file = writeCsv(dir, "bad.csv", ["month", "North", "South"], [air.map((_, i) => `m${i}`), air, [4, "n/a", 6]]);
+    const r = runEbb(["fit", file, "--period", "12"]);
+    expect(r.status).toBe(2);
+    // "n/a" is in the second data row, line 3 of the file (line 1 holds the names), column C.
+    expect(r.stderr).toMatch(/series "South" failed: Cell C3 of .*bad\.csv \(series "South", line 3, column 3\): "n\/a" is not a number/);
+    const [north, south] = JSON.parse(r.stdout).series;
+    expect(north).toEqual({ name: "North", ...engineSummary(air, { period: 12 }) });
+    expect(Object.keys(south)).toEqual(["name", "error"]);
   });
 
   it("lists the accepted words for an unknown option word (words: DESIGN.md)", () => {

@@ -19,6 +19,12 @@ describe("toRunSettings", () => {
     expect(s).toMatchObject({ horizon: 8, coverage: 0.8, holdout: 6, format: "csv" });
   });
 
+  it("reads coverage as a fraction or a percentage (0.95 and 95 are the same)", () => {
+    expect(toRunSettings({ coverage: "95" }).coverage).toBe(0.95);
+    expect(toRunSettings({ coverage: "0.95" }).coverage).toBe(0.95);
+    expect(toRunSettings({ coverage: "80.5" }).coverage).toBeCloseTo(0.805, 15);
+  });
+
   it("lists the accepted words for an unknown word", () => {
     expect(() => toRunSettings({ trend: "wavy" })).toThrow(/--trend: .*linear, damped, none, auto/);
     expect(() => toRunSettings({ start: "guess" })).toThrow(/--start: .*decomposition, classic, optimized/);
@@ -32,7 +38,11 @@ describe("toRunSettings", () => {
       [{ period: "2.5" }, /--period/],
       [{ cycles: "1" }, /--cycles/],
       [{ horizon: "0" }, /--horizon/],
-      [{ coverage: "95" }, /--coverage/],
+      [{ coverage: "100" }, /--coverage: Coverage must be a fraction between 0 and 1 \(such as 0.95\) or a percentage between 1 and 100 \(such as 95\)/],
+      [{ coverage: "1" }, /--coverage/],
+      [{ workers: "0" }, /--workers/],
+      [{ delimiter: "x" }, /--delimiter/],
+      [{ decimal: ";" }, /--decimal/],
       [{ holdout: "-3" }, /--holdout/],
     ];
     for (const [raw, message] of cases) {

@@ -14,12 +14,12 @@ export interface EbbRun {
 }
 
 /** `tsx src/cli/main.ts <args>` from the repository root, with optional standard input. */
-export function runEbb(args: string[], input?: string): EbbRun {
-  return spawnCommand(TSX, [join(REPO, "src", "cli", "main.ts"), ...args], REPO, input);
+export function runEbb(args: string[], input?: string, env: Record<string, string> = {}): EbbRun {
+  return spawnCommand(TSX, [join(REPO, "src", "cli", "main.ts"), ...args], REPO, input, env);
 }
 
-export function spawnCommand(command: string, args: string[], cwd: string, input?: string): EbbRun {
-  const r = spawnSync(command, args, { cwd, input, encoding: "utf8", env: { ...process.env, FORCE_COLOR: "0" }, timeout: 120000 });
+export function spawnCommand(command: string, args: string[], cwd: string, input?: string, env: Record<string, string> = {}): EbbRun {
+  const r = spawnSync(command, args, { cwd, input, encoding: "utf8", env: { ...process.env, FORCE_COLOR: "0", ...env }, timeout: 120000, maxBuffer: 256 * 1024 * 1024 });
   if (r.error) throw r.error;
   return { status: r.status, stdout: r.stdout, stderr: r.stderr };
 }

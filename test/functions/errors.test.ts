@@ -154,10 +154,10 @@ const cases: Case[] = [
     message: /^phi applies only to a damped trend; the trend is linear\./,
   },
   {
-    what: "coverage typed as a percentage",
-    formula: "=EBB.BAND(A1:A36, 12, 6, 95)",
+    what: "coverage of 100 percent (an unbounded interval)",
+    formula: "=EBB.BAND(A1:A36, 12, 6, 100)",
     type: "VALUE",
-    message: /^Coverage must be a fraction between 0 and 1, such as 0\.95; got 95\.$/,
+    message: /^Coverage must be a fraction between 0 and 1 \(such as 0\.95\) or a percentage between 1 and 100 \(such as 95\); got 100\.$/,
   },
   {
     what: '"auto" where one given state is updated',

@@ -73,6 +73,12 @@ test("EBB.BAND: low and high of the prediction interval, two columns per series"
   });
 });
 
+test("EBB.BAND: coverage as a percentage (80) gives the same interval as the fraction (0.8)", () => {
+  const fraction = sheetWith('=EBB.BAND(A1:B84, 12, 4, 0.8, "additive")');
+  const percent = sheetWith('=EBB.BAND(A1:B84, 12, 4, 80, "additive")');
+  expect(block(percent.hf, percent.sheet, "D1", 4, 4)).toEqual(block(fraction.hf, fraction.sheet, "D1", 4, 4));
+});
+
 test("EBB.BACKTEST: MAD, MAPE, MASE and origins per step ahead", () => {
   const { hf, sheet } = sheetWith("=EBB.BACKTEST(A1:A84, 12, 3, 4)");
   const out = block(hf, sheet, "D1", 3, 4);

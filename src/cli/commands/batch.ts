@@ -1,9 +1,9 @@
+import type { Command } from "commander";
 import { EbbError } from "../../engine";
 import { CliError } from "../cliError";
-import type { RunSettings } from "../options";
-import { emit, toCsv, toJson } from "../output";
-import { progressReporter } from "../progress";
-import { parseSeriesCsv, readInputText, type SeriesColumn } from "../readCsv";
+import type { SeriesColumn } from "../input/seriesTable";
+import type { OptionGroup, RunSettings } from "../options";
+import { csvLine, jsonText } from "../output";
 
 /** One entry of `{"series": [...]}`: the series name, then either the command's fields or `error`. */
 export interface SeriesEntry {
@@ -12,68 +12,73 @@ export interface SeriesEntry {
   [field: string]: unknown;
 }
 
-/** What a batch command (fit, states, ahead, backtest) adds to the shared run. */
+/** What a series is run with: the settings, and the file's period labels when it has a label column. */
+export interface RunContext {
+  settings: RunSettings;
+  labels?: readonly string[];
+}
+
+/**
+ * A batch command (fit, states, ahead, backtest, ...): its name and help, what it adds to the
+ * shared run, and how its results are written. A new command is one file exporting one of
+ * these, listed in commands/index.ts; main.ts and the worker threads find it there.
+ */
 export interface BatchCommand {
+  name: string;
+  /** One line for the program's command list. */
+  summary: string;
+  /** Text shown after the option list of `<command> --help`. */
+  help: string;
+  /** Shared options the command takes beyond the model options. */
+  options: OptionGroup[];
+  /** Options of its own: added to the command line, and read into `settings.extra` (plain data: it goes to worker threads). */
+  addOptions?(cmd: Command): void;
+  readOptions?(raw: Record<string, unknown>): Record<string, unknown>;
   /** The fields of one series' entry. May throw an EbbError: the series then carries `error`. */
-  runSeries(column: SeriesColumn, settings: RunSettings): Record<string, unknown>;
-  /** Columns of the --format csv table; "series" first, "message" last (the failure text). */
+  runSeries(column: SeriesColumn, run: RunContext): Record<string, unknown>;
+  /** Columns of the --format csv table; "series" first, "message" last; "label" is left out when the file has no labels. */
   csvColumns: readonly string[];
   /** Rows of the csv table for one successful series. */
   csvRows(entry: SeriesEntry): Record<string, unknown>[];
-  /** Top-level fields beside "series" (the backtest's overall scores). */
-  summarize?(entries: SeriesEntry[]): Record<string, unknown>;
+  /** A small record per entry (failed ones too) for `summarize`, kept instead of the entries. */
+  digest?(entry: SeriesEntry): unknown;
+  /** Top-level fields written after "series" (the backtest's overall scores). */
+  summarize?(digests: unknown[]): Record<string, unknown>;
+  /** A line printed on standard error after every run (a caution). */
+  closingNote?: string;
 }
 
-/** Most failure lines printed on standard error; the rest are counted (all are in the output). */
-const WARNING_LINES = 20;
-
-/** Run a command over every series of a CSV file and write the result. Returns the exit status. */
-export function runBatch(command: BatchCommand, file: string, settings: RunSettings): number {
-  const source = file === "-" ? "standard input" : file;
-  const { columns } = parseSeriesCsv(readInputText(file), source);
-  const entries = runAll(command, columns, settings);
-  const doc = { series: entries, ...(command.summarize ? command.summarize(entries) : {}) };
-  emit(settings.format === "csv" ? csvText(command, entries) : toJson(doc), settings.out);
-  return reportFailures(entries);
+/** One series run and written: its text in the chosen format, its digest, and its failure if any. */
+export interface SeriesResult {
+  name: string;
+  text: string;
+  digest?: unknown;
+  error?: string;
 }
 
-function runAll(command: BatchCommand, columns: SeriesColumn[], settings: RunSettings): SeriesEntry[] {
-  const tick = progressReporter(columns.length, settings.progress);
-  return columns.map((column, i) => {
-    tick(i + 1);
-    try {
-      return { name: column.name, ...command.runSeries(column, settings) };
-    } catch (e) {
-      return { name: column.name, error: failureText(e) };
-    }
-  });
+/** The csv columns for this file: "label" only when it has a label column. */
+export function csvColumnsFor(command: BatchCommand, labelled: boolean): readonly string[] {
+  return labelled ? command.csvColumns : command.csvColumns.filter((c) => c !== "label");
+}
+
+/** Run one series and render it; a failure becomes the entry's `error`, never an exception. */
+export function runOne(command: BatchCommand, column: SeriesColumn, run: RunContext): SeriesResult {
+  let entry: SeriesEntry;
+  try {
+    if (column.problem !== undefined) throw new CliError(column.problem);
+    entry = { name: column.name, ...command.runSeries(column, run) };
+  } catch (e) {
+    entry = { name: column.name, error: failureText(e) };
+  }
+  const digest = command.digest?.(entry);
+  if (run.settings.format === "json") return { name: entry.name, text: `    ${jsonText(entry, "    ")}`, digest, error: entry.error };
+  const columns = csvColumnsFor(command, run.labels !== undefined);
+  const rows = entry.error !== undefined ? [{ series: entry.name, message: entry.error }] : command.csvRows(entry).map((row) => ({ series: entry.name, ...row }));
+  return { name: entry.name, text: rows.map((row) => csvLine(columns, row)).join(""), digest, error: entry.error };
 }
 
 /** An engine error's message is written for the user; anything else is a defect, said so plainly. */
 function failureText(e: unknown): string {
   if (e instanceof EbbError || e instanceof CliError) return e.message;
   return `Internal error, please report it: ${e instanceof Error ? e.message : String(e)}`;
-}
-
-function csvText(command: BatchCommand, entries: SeriesEntry[]): string {
-  const rows: Record<string, unknown>[] = [];
-  for (const entry of entries) {
-    if (entry.error !== undefined) rows.push({ series: entry.name, message: entry.error });
-    else for (const row of command.csvRows(entry)) rows.push({ series: entry.name, ...row });
-  }
-  return toCsv(command.csvColumns, rows);
-}
-
-/** Warn on standard error about failed series; exit status 1 only when no series ran at all. */
-function reportFailures(entries: SeriesEntry[]): number {
-  const failed = entries.filter((e) => e.error !== undefined);
-  failed.slice(0, WARNING_LINES).forEach((e) => process.stderr.write(`ebb: warning: series "${e.name}" failed: ${e.error}\n`));
-  if (failed.length > WARNING_LINES) {
-    process.stderr.write(`ebb: warning: ${failed.length - WARNING_LINES} more series failed; see their "error" fields.\n`);
-  }
-  if (failed.length > 0 && failed.length === entries.length) {
-    process.stderr.write(`ebb: no series could be run.\n`);
-    return 1;
-  }
-  return 0;
 }

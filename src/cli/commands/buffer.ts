@@ -1,9 +1,9 @@
 import { checkServiceLevel, checkWholePeriods, EbbError, fitModel, stockBuffer, type BufferSettings } from "../../engine";
 import { STOCK_CAUTION } from "../../taskpane/panel/cautions";
 import { CliError } from "../cliError";
-import { isNumberText } from "../readCsv";
-import type { RunSettings } from "../options";
-import { runBatch, type BatchCommand } from "./batch";
+import { BUFFER_HELP } from "../help";
+import { isNumberText } from "../options";
+import type { BatchCommand } from "./batch";
 import { modelSummary } from "./modelSummary";
 
 /** The buffer command's own options, as commander hands them over. */
@@ -43,36 +43,40 @@ function option(name: string, text: string, check: (v: number) => number): numbe
  * sd, one-step sd x sqrt(periods), is shown beside it for comparison. Every output carries the
  * stock caution.
  */
-export function runBuffer(file: string, settings: RunSettings, raw: BufferOptions): number {
-  const status = runBatch(bufferCommand(bufferSettings(raw)), file, settings);
-  process.stderr.write(`ebb: ${STOCK_CAUTION}\n`);
-  return status;
-}
-
-export function bufferCommand(buffer: BufferSettings): BatchCommand {
-  return {
-    runSeries(column, settings) {
-      const model = fitModel(column.values, settings.model);
-      const b = stockBuffer(model, buffer);
-      return {
-        ...modelSummary(model),
-        buffer: {
-          lead_time: b.leadTime,
-          review_period: b.reviewPeriod,
-          service_level: b.serviceLevel,
-          periods: b.periods,
-          demand: b.forecast,
-          sd: b.sd,
-          shortcut_sd: b.rootPeriodsSd,
-          method: b.method,
-          z: b.z,
-          safety_stock: b.safetyStock,
-          reorder_point: b.reorderPoint,
-        },
-      };
-    },
-    csvColumns: ["series", "lead_time", "review_period", "service_level", "demand", "sd", "shortcut_sd", "safety_stock", "reorder_point", "method", "message"],
-    csvRows: (entry) => [entry.buffer as Record<string, unknown>],
-    summarize: () => ({ caution: STOCK_CAUTION }),
-  };
-}
+export const bufferCommand: BatchCommand = {
+  name: "buffer",
+  summary: "per series: lead-time demand, its error's standard deviation, safety stock, reorder point",
+  help: BUFFER_HELP,
+  options: [],
+  addOptions(cmd) {
+    cmd
+      .option("--lead-time <L>", "periods from placing an order to receiving it (required)")
+      .option("--service-level <S>", `cycle service level, such as 0.95 (default: ${DEFAULT_SERVICE_LEVEL})`)
+      .option("--review-period <R>", "periods between stock reviews; 0 for continuous review (default: 0)");
+  },
+  readOptions: (raw) => ({ ...bufferSettings(raw as BufferOptions) }),
+  runSeries(column, run) {
+    const model = fitModel(column.values, run.settings.model);
+    const b = stockBuffer(model, run.settings.extra as unknown as BufferSettings);
+    return {
+      ...modelSummary(model),
+      buffer: {
+        lead_time: b.leadTime,
+        review_period: b.reviewPeriod,
+        service_level: b.serviceLevel,
+        periods: b.periods,
+        demand: b.forecast,
+        sd: b.sd,
+        shortcut_sd: b.rootPeriodsSd,
+        method: b.method,
+        z: b.z,
+        safety_stock: b.safetyStock,
+        reorder_point: b.reorderPoint,
+      },
+    };
+  },
+  csvColumns: ["series", "lead_time", "review_period", "service_level", "demand", "sd", "shortcut_sd", "safety_stock", "reorder_point", "method", "message"],
+  csvRows: (entry) => [entry.buffer as Record<string, unknown>],
+  summarize: () => ({ caution: STOCK_CAUTION }),
+  closingNote: STOCK_CAUTION,
+};

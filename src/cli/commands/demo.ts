@@ -1,7 +1,12 @@
 import { EbbError, fitModel, predictionInterval, type FittedModel } from "../../engine";
 import { DEMO_COMPANY, DEMO_CSV_PATH, DEMO_NOTICE } from "../../preview/demo/generate-demo";
-import type { RunSettings } from "../options";
-import { parseSeriesCsv, readInputText } from "../readCsv";
+import { readFileSync } from "fs";
+import { nextLabels } from "../input/periodLabels";
+import { parseSeriesText } from "../input/readSeries";
+import type { Defaults, RunSettings } from "../options";
+
+/** The demo's own defaults (its help shows these): the automatic choice, with 95% intervals. */
+export const DEMO_DEFAULTS: Defaults = { seasonality: "auto", trend: "auto", coverage: 0.95 };
 
 /** DESIGN "Cautions": shown with every demo outlook. */
 export const CAUTION_TEXT =
@@ -14,20 +19,22 @@ export const CAUTION_TEXT =
  * the invented Larkmere demo data, printed as a readable table per product.
  */
 export function runDemo(settings: RunSettings): number {
-  const { columns, labels } = parseSeriesCsv(readInputText(DEMO_CSV_PATH), DEMO_CSV_PATH);
+  const data = parseSeriesText(readFileSync(DEMO_CSV_PATH, "utf8"), DEMO_CSV_PATH);
+  const labels = data.labels?.values ?? [];
   const coverage = settings.coverage as number;
-  const lastLabel = labels?.values[labels.values.length - 1];
   const out: string[] = [];
   out.push(`Ebb demo: ${DEMO_COMPANY}, next ${settings.horizon} months with ${percent(coverage)} prediction intervals`);
   out.push(DEMO_NOTICE, "");
-  for (const column of columns) {
+  for (let k = 0; k < data.seriesCount; k++) {
+    const column = data.column(k);
+    const months = nextLabels(labels, column.values.length - 1, settings.horizon);
     let model: FittedModel;
     try {
       model = fitModel(column.values, settings.model);
       const band = predictionInterval(model, settings.horizon, coverage);
       out.push(column.name);
       out.push(`  ${describe(model)}`);
-      out.push(table(["month", "forecast", "low", "high"], Array.from(band.forecast, (f, i) => [nextLabel(lastLabel, i + 1), whole(f), whole(band.low[i]), whole(band.high[i])])));
+      out.push(table(["month", "forecast", "low", "high"], Array.from(band.forecast, (f, i) => [months?.[i] ?? `t+${i + 1}`, whole(f), whole(band.low[i]), whole(band.high[i])])));
     } catch (e) {
       if (!(e instanceof EbbError)) throw e;
       out.push(column.name, `  not forecast: ${e.message}`);
@@ -48,14 +55,6 @@ function describe(m: FittedModel): string {
   if (spec.seasonality !== "none") constants.push(`gamma ${c.gamma.toFixed(3)}`);
   if (spec.trend === "damped") constants.push(`phi ${c.phi.toFixed(3)}`);
   return `${parts.join(", ")}; ${constants.join(", ")}; one-step RMSE ${m.rmse.toFixed(1)}`;
-}
-
-/** "2025-12" + 1 -> "2026-01"; any other label style: "t+h". */
-function nextLabel(last: string | undefined, h: number): string {
-  const m = last === undefined ? null : /^(\d{4})-(\d{2})$/.exec(last);
-  if (!m) return `t+${h}`;
-  const months = Number(m[1]) * 12 + Number(m[2]) - 1 + h;
-  return `${Math.floor(months / 12)}-${String((months % 12) + 1).padStart(2, "0")}`;
 }
 
 function whole(v: number): string {

@@ -110,7 +110,8 @@ function writeChartBlock(sheet: ExcelJS.Worksheet, desc: LedgerDescription, cach
     c.value = label;
     c.font = { bold: true };
     c.fill = { type: "pattern", pattern: "solid", fgColor: { argb: argb(ROLE_STYLES.header.fill!) } };
-    sheet.getColumn(left + j + 1).width = 12;
+    c.alignment = { wrapText: true, vertical: "top" };
+    sheet.getColumn(left + j + 1).width = Math.max(12, Math.min(24, label.length + 2));
   });
   const byAddress = new Map(desc.cells.map((c) => [c.address, c]));
   const u = desc.layout.updates;
@@ -122,6 +123,8 @@ function writeChartBlock(sheet: ExcelJS.Worksheet, desc: LedgerDescription, cach
     const target = sheet.getCell(cellAddress(row, left + j));
     const f = formula ?? source;
     target.value = cached && value !== null && value !== "" ? ({ formula: f, result: value } as ExcelJS.CellFormulaValue) : ({ formula: f } as ExcelJS.CellFormulaValue);
+    // The ledger's own number format (whole units, periods): not the file's default of every digit.
+    if (src?.format) target.numFmt = src.format;
   };
   for (const { row, start } of u.rows) {
     link(r, 0, cellAddress(row, col("period")));

@@ -5,23 +5,40 @@ import { describeLedger } from "../describe/describeLedger";
 import { defaultTag } from "../describe/names";
 import type { LedgerWorkbookSettings } from "../describe/types";
 
+/** A series the workbook holds no ledger for, and why. */
+export interface LeftOut {
+  name: string;
+  reason: string;
+}
+
 /**
- * The .xlsx workbook of `ebb ledger`: a data sheet with every series, then one ledger sheet
- * per series. A series that cannot be written gets a sheet with the reason instead, and the
- * others are still written.
+ * The .xlsx workbook of `ebb ledger`: a data sheet with the label column (when given) and every
+ * series, then one ledger sheet per series. A series that cannot be written gets a sheet with
+ * the reason instead, the others are still written, and the ones left out are returned.
  */
 export async function writeLedgerWorkbook(
-  columns: { name: string; values: (number | null)[] }[],
+  columns: { name: string; values: (number | null)[]; problem?: string }[],
   settings: LedgerWorkbookSettings,
   outPath: string,
-): Promise<void> {
+  labels?: { name: string; values: string[] },
+): Promise<LeftOut[]> {
   const workbook = new ExcelJS.Workbook();
   workbook.creator = "Ebb";
   workbook.calcProperties.fullCalcOnLoad = true;
   const used = new Set<string>(["data"]);
   const usedTags = new Set<string>();
   const data = workbook.addWorksheet("Data");
-  columns.forEach((c, j) => {
+  const first = labels ? 1 : 0;
+  if (labels) {
+    data.getCell(1, 1).value = labels.name;
+    data.getCell(1, 1).font = { bold: true };
+    data.getColumn(1).width = Math.max(10, Math.min(30, Math.max(labels.name.length, ...labels.values.slice(0, 50).map((v) => v.length)) + 2));
+    labels.values.forEach((v, i) => {
+      if (v !== "") data.getCell(i + 2, 1).value = v;
+    });
+  }
+  columns.forEach((c, k) => {
+    const j = k + first;
     data.getCell(1, j + 1).value = c.name;
     data.getCell(1, j + 1).font = { bold: true };
     data.getColumn(j + 1).width = Math.max(10, Math.min(30, c.name.length + 2));
@@ -30,12 +47,14 @@ export async function writeLedgerWorkbook(
     });
   });
   const { horizon, coverage, ...model } = settings;
+  const leftOut: LeftOut[] = [];
   for (const column of columns) {
     const sheet = uniqueSheetName(`Ledger ${column.name}`, used);
     let tag = defaultTag(sheet, "A1");
     for (let k = 2; usedTags.has(tag.toLowerCase()); k++) tag = `${defaultTag(sheet, "A1").slice(0, 10)}${k}`;
     usedTags.add(tag.toLowerCase());
     try {
+      if (column.problem !== undefined) throw new EbbError("value", "bad-cell", column.problem);
       const desc = describeLedger({ history: column.values, name: column.name, settings: model, horizon, coverage, anchor: { sheet, cell: "A1" }, tag });
       addLedgerToWorkbook(workbook, desc);
     } catch (e) {
@@ -44,9 +63,11 @@ export async function writeLedgerWorkbook(
       ws.getCell("A1").value = `Ebb ledger: ${column.name}`;
       ws.getCell("A1").font = { bold: true, size: 14 };
       ws.getCell("A3").value = `This series has no ledger: ${e.message}`;
+      leftOut.push({ name: column.name, reason: e.message });
     }
   }
   await workbook.xlsx.writeFile(outPath);
+  return leftOut;
 }
 
 /** A sheet name the hosts accept (31 characters, no : \ / ? * [ ]) and not yet used. */

@@ -2,6 +2,7 @@
  * The panel's form as ledger settings: every typed value checked, with a message that says
  * which field is wrong and what to type instead.
  */
+import { COVERAGE_FORMS, parseCoverage } from "../../engine";
 import type { LedgerSettings } from "../../ledger/describe/types";
 
 export interface FormValues {
@@ -53,9 +54,12 @@ export function readForm(v: FormValues): FormResult {
   }
   const horizon = wholeNumber(v.horizon, 1, MAX_HORIZON);
   if (horizon === undefined) return { ok: false, field: "horizon", message: `Periods ahead: type a whole number from 1 to ${MAX_HORIZON}.` };
-  const pct = Number(v.coveragePercent.trim());
-  if (v.coveragePercent.trim() === "" || !Number.isFinite(pct) || pct < 50 || pct >= 100) {
-    return { ok: false, field: "coveragePercent", message: "Interval coverage: type a percentage from 50 to 99.9, such as 95." };
+  let coverage: number;
+  try {
+    if (v.coveragePercent.trim() === "") throw new Error("blank");
+    coverage = parseCoverage(Number(v.coveragePercent.trim()));
+  } catch {
+    return { ok: false, field: "coveragePercent", message: `Interval coverage: type ${COVERAGE_FORMS}.` };
   }
   const settings: LedgerSettings = { period, seasonality: v.seasonality, trend: v.trend, start: v.start };
   if (v.constantsMode === "typed") {
@@ -65,7 +69,7 @@ export function readForm(v: FormValues): FormResult {
       if (c !== undefined) settings[key] = c;
     }
   }
-  return { ok: true, value: { settings, horizon, coverage: pct / 100 } };
+  return { ok: true, value: { settings, horizon, coverage } };
 }
 
 /** A sheet name the hosts accept, made from a series name: at most 31 characters, no : \ / ? * [ ]. */
