@@ -1,12 +1,15 @@
 /**
  * The demo workbook the preview opens with: the invented Larkmere Garden Supply sales (from the
  * committed CSV) on "Sales", a rolling forecast table built from EBB functions beside them, and
- * a "Read me" sheet with the notice and the cautions.
+ * a "Corrections" sheet (corrected history with reasons, suggestions, safety stock), and a
+ * "Read me" sheet with the notice and the cautions.
  */
 import type { RawCellContent } from "hyperformula";
 import { columnLetters } from "./addresses";
 import { parseCsv } from "./csvText";
 import { CAUTIONS } from "../../taskpane/panel/cautions";
+import { DEMO_EVENTS } from "../demo/events";
+import { buildCorrectionsSheet, CORRECTIONS_SHEET } from "./correctionsSheet";
 
 export const SALES_SHEET = "Sales";
 export const README_SHEET = "Read me";
@@ -117,11 +120,22 @@ export function buildDemoWorkbook(csvText: string, notice: string): DemoWorkbook
     put(L.accuracyFirstRow, v(2 * k), `=EBB.ACCURACY(${hist}, EBB.FITTED(${hist}, ${DEMO_PERIOD}), ${hist}, ${DEMO_PERIOD})`);
   }
 
+  const corrections = buildCorrectionsSheet(
+    data.map((line) => line[0]),
+    header.indexOf(DEMO_EVENTS[0].product),
+    SALES_SHEET,
+    HISTORY_LAST_ROW,
+    DEMO_PERIOD,
+  );
   const readme: RawCellContent[][] = readmeLines(notice).map((line) => [line]);
   const widths: Record<number, number> = { 0: 66, [L.labelCol - 1]: 18, [L.labelCol]: 96 };
   for (let c = 1; c <= productCount; c++) widths[c] = 84;
   for (let k = 0; k < 2 * productCount; k++) widths[L.firstValueCol + k] = 92;
-  return { sheets: { [SALES_SHEET]: sales, [README_SHEET]: readme }, productCount, widths: { [SALES_SHEET]: widths, [README_SHEET]: { 0: 900 } } };
+  return {
+    sheets: { [SALES_SHEET]: sales, [CORRECTIONS_SHEET]: corrections.cells, [README_SHEET]: readme },
+    productCount,
+    widths: { [SALES_SHEET]: widths, [CORRECTIONS_SHEET]: corrections.widths, [README_SHEET]: { 0: 900 } },
+  };
 }
 
 function readmeLines(notice: string): string[] {
@@ -142,6 +156,7 @@ function readmeLines(notice: string): string[] {
     "1. On Sales, type a new month's figure in row 86 under a product (for example 700 in B86): the forecast, ranges and scores recompute.",
     "2. Select one product's column (click its letter), then use the Ebb ledger panel to write a ledger: plain formulas, one row per month.",
     "3. On the ledger sheet, change alpha in its settings and watch every row recompute; use Verify to check the ledger against Ebb's engine.",
+    "4. On Corrections: hose reels had an (invented) promotion in March 2024 and a stock-out in June 2025. EBB.UNUSUAL flags both and suggests a value; the planner typed a correction and a reason beside each actual. The outlook and safety stock are shown as recorded and with the corrections (EBB.CORRECTED). Clear a correction to see its effect; the actuals on Sales never change.",
     "",
     "Errors: #N/A means more history is needed (the message says how much); #VALUE! means an input must be changed. Hover over an error or select it to read why.",
   ];

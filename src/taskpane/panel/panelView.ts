@@ -2,7 +2,7 @@
  * The Ebb ledger panel's page: plain form controls in a fixed order, so everything can be
  * reached with Tab and read by a screen reader. No logic here; mountLedgerPanel wires it.
  */
-import { CAUTIONS } from "./cautions";
+import { CAUTIONS, STOCK_CAUTION } from "./cautions";
 import { el } from "./dom";
 import type { FormValues } from "./readForm";
 
@@ -189,7 +189,7 @@ export function buildPanelView(): PanelView {
     { class: "ebb-panel" },
     el("h2", { class: "ebb-title", text: "Ebb ledger" }),
     el("p", { class: "ebb-intro", text: "Writes a forecast as plain formulas, one row per period, that anyone can follow and recompute." }),
-    el("details", { class: "ebb-cautions", open: true }, el("summary", { text: "Before you rely on a forecast" }), el("p", { text: CAUTIONS })),
+    el("details", { class: "ebb-cautions", open: true }, el("summary", { text: "Before you rely on a forecast" }), el("p", { text: CAUTIONS }), el("p", { text: STOCK_CAUTION })),
     form,
     confirm,
     progress,

@@ -1,0 +1,62 @@
+/**
+ * The preview's Corrections sheet in Chromium: the invented hose-reel promotion and stock-out,
+ * their typed corrections and reasons, EBB.UNUSUAL's flags and the corrected outlook and safety
+ * stock as the page shows them. Expected numbers: Ebb's engine run here on the committed demo CSV
+ * with the sheet's corrections applied. A screenshot goes to test-artifacts/.
+ */
+import { mkdirSync } from "fs";
+import { join } from "path";
+import { applyCorrections, fitModel, forecastModel, stockBuffer } from "../../src/engine";
+import { DEMO_EVENTS, demoMonths } from "../../src/preview/demo/generate-demo";
+import { CORRECTIONS_SHEET, DEMO_CORRECTIONS, DEMO_LEAD_TIME, DEMO_SERVICE_LEVEL } from "../../src/preview/workbook/correctionsSheet";
+import { describeWithChromium, launchChromium, requireChromium, type Browser } from "./support/chromium";
+import { demoColumns } from "./support/demoSeries";
+import { REPO, startPreviewServer, type PreviewServer } from "./support/previewServer";
+
+const ARTIFACTS = join(REPO, "test-artifacts");
+
+describeWithChromium("preview Corrections sheet in Chromium", () => {
+  let browser: Browser | undefined;
+  let server: PreviewServer | undefined;
+
+  beforeAll(async () => {
+    requireChromium();
+    server = await startPreviewServer();
+    browser = await launchChromium();
+  }, 300000);
+
+  afterAll(async () => {
+    await browser?.close();
+    await server?.stop();
+  });
+
+  test("flags, corrections, reasons and the corrected figures are the engine's", async () => {
+    const page = browser!.page;
+    await page.setViewportSize({ width: 1400, height: 800 });
+    await page.goto(server!.url);
+    await page.waitForSelector("body[data-ready=true]");
+    await page.click(`button.sheet-tab:has-text("${CORRECTIONS_SHEET}")`);
+    await page.waitForSelector('td[data-cell="K4"]');
+    const cell = (a: string) => page.$eval(`td[data-cell="${a}"]`, (td) => ({ text: td.textContent ?? "", value: (td as HTMLElement).dataset.value ?? null }));
+
+    const hose = demoColumns().find((c) => c.name === DEMO_EVENTS[0].product)!.values;
+    const months = demoMonths();
+    for (const e of DEMO_EVENTS) {
+      const row = months.indexOf(e.month) + 2;
+      expect((await cell(`C${row}`)).value).toBe(String(DEMO_CORRECTIONS[e.month]));
+      expect((await cell(`D${row}`)).text).toBe(e.reason);
+      expect((await cell(`F${row}`)).text).toBe(e.kind === "promotion" ? "high" : "low");
+    }
+    const fixes = months.map((m) => DEMO_CORRECTIONS[m] ?? null);
+    const model = fitModel(applyCorrections(hose, fixes).values, { period: 12 });
+    const first = forecastModel(model, 1)[0];
+    expect(Math.abs(Number((await cell("K4")).value) - first)).toBeLessThanOrEqual(1e-9 * first);
+    const b = stockBuffer(model, { leadTime: DEMO_LEAD_TIME, serviceLevel: DEMO_SERVICE_LEVEL });
+    expect(Math.abs(Number((await cell("K22")).value) - b.reorderPoint)).toBeLessThanOrEqual(1e-9 * b.reorderPoint);
+
+    const row = months.indexOf(DEMO_EVENTS[1].month) + 2;
+    await page.click(`td[data-cell="C${row}"]`);
+    mkdirSync(ARTIFACTS, { recursive: true });
+    await page.screenshot({ path: join(ARTIFACTS, "preview-corrections.png") });
+  });
+});
