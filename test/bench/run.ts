@@ -16,6 +16,7 @@ import { CLASSIC, runAccuracy } from "./accuracy";
 import { measureAhead } from "./ahead";
 import { describeCode, describeMachine } from "./machine";
 import { evenSample, loadM3 } from "./m3";
+import { renderOrder, runOrderBench } from "./order";
 import { Progress } from "./progress";
 import { compareSse, scoreReference } from "./referenceScoring";
 import { runReferences } from "./references";
@@ -75,6 +76,9 @@ async function main(): Promise<void> {
   const coverage = new CoverageTally();
   const accuracy = runAccuracy(series, board, coverage, progress, memory);
 
+  const order = runOrderBench(monthly, args.quick, progress);
+  memory.sample();
+
   progress.note("functions layer: one AHEAD call over 1000 series x 120 periods");
   const ahead = await measureAhead(allMonthly);
   memory.sample();
@@ -115,7 +119,7 @@ async function main(): Promise<void> {
   result.peakHeapBytes = memory.peakHeap;
   result.elapsedSeconds = now() - started;
   result.loadAverage = [loadAtStart, loadavg()[0]];
-  const report = renderReport(result);
+  const report = renderReport(result) + "\n" + renderOrder(order) + "\n";
   process.stdout.write(report);
   if (args.out) {
     writeFileSync(args.out, report);
