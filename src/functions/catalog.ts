@@ -358,7 +358,7 @@ export const CATALOG: FunctionSpec[] = [
       HISTORY,
       PERIOD,
       { name: "lead_time", kind: "value", help: "Periods from placing an order to receiving it, a whole number such as 3." },
-      { name: "service_level", kind: "value", help: "Cycle service level: the chance of no stock-out before the order arrives, such as 0.95." },
+      { name: "service_level", kind: "value", help: "Cycle service level: the chance of no stock-out before the order arrives, such as 0.95 (or 95)." },
       {
         name: "review_period",
         kind: "value",

@@ -293,7 +293,7 @@ export function unusual(history: any[][], period: any, threshold?: any): any[][]
  * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
  * @param period Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.
  * @param lead_time Periods from placing an order to receiving it, a whole number such as 3.
- * @param service_level Cycle service level: the chance of no stock-out before the order arrives, such as 0.95.
+ * @param service_level Cycle service level: the chance of no stock-out before the order arrives, such as 0.95 (or 95).
  * @param review_period Periods between stock reviews (0 or blank: continuous review). With a review period the last row is the order-up-to level.
  * @param options Model settings as plain words in any order: multiplicative or additive; linear, damped or none; decomposition, classic or optimized; "auto" chooses seasonality and trend. Blank: multiplicative linear, as in EBB.AHEAD.
  */

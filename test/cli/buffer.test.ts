@@ -62,7 +62,7 @@ test("csv: one row per series", () => {
 test("missing or wrong buffer options are refused with what to type", () => {
   expect(runEbb(["buffer", file, "--period", "12"]).stderr).toMatch(/--lead-time is required/);
   expect(runEbb(["buffer", file, "--lead-time", "2.5"]).stderr).toMatch(/--lead-time: .*Round a part period up/);
-  expect(runEbb(["buffer", file, "--lead-time", "3", "--service-level", "95"]).stderr).toMatch(/type 0.95 for 95%/);
+  expect(runEbb(["buffer", file, "--lead-time", "3", "--service-level", "0.2"]).stderr).toMatch(/--service-level: The service level must be from 0.5/);
   const help = runEbb(["buffer", "--help"]);
   expect(help.stdout).toMatch(/--lead-time <L>/);
   expect(help.stdout).toMatch(/supplier terms, shelf life/);

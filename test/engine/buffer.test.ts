@@ -201,8 +201,9 @@ describe("safety stock and reorder point", () => {
   test("bad settings get a message that says what to type", () => {
     expect(() => stockBuffer(m, { leadTime: 0, serviceLevel: 0.95 })).toThrow(/lead time must be a whole number of periods from 1/);
     expect(() => stockBuffer(m, { leadTime: 2.5, serviceLevel: 0.95 })).toThrow(/Round a part period up/);
-    expect(() => stockBuffer(m, { leadTime: 3, serviceLevel: 95 })).toThrow(/type 0.95 for 95%/);
+    expect(stockBuffer(m, { leadTime: 3, serviceLevel: 95 })).toEqual(stockBuffer(m, { leadTime: 3, serviceLevel: 0.95 })); // a percent, as coverage
     expect(() => stockBuffer(m, { leadTime: 3, serviceLevel: 0.3 })).toThrow(/from 0.5 to 0.9999/);
+    expect(() => stockBuffer(m, { leadTime: 3, serviceLevel: 1 })).toThrow(/from 0.5 to 0.9999/);
     expect(() => stockBuffer(m, { leadTime: 3, reviewPeriod: -1, serviceLevel: 0.9 })).toThrow(/review period/);
   });
 });

@@ -93,7 +93,7 @@ test("EBB.BUFFER: four rows per series, one column per product, options as words
   const grid = sheet();
   grid[0][6] = `=EBB.BUFFER(A1:C${ROWS}, 12, 3, 0.95, 1, "auto")`; // G1:I4
   grid[10][6] = `=EBB.BUFFER(A1:A${ROWS}, 12, 3, 0.95, , "additive damped")`;
-  grid[20][6] = `=EBB.BUFFER(A1:A${ROWS}, 12, 3, 95)`;
+  grid[20][6] = `=EBB.BUFFER(A1:A${ROWS}, 12, 3, 100)`;
   grid[30][6] = `=EBB.BUFFER(A1:A${ROWS}, 12, 3, 0.95, 0, "additive sideways")`;
   const { hf, sheet: s } = workbook(grid);
   const table = block(hf, s, "G1", 4, 3);
@@ -101,6 +101,6 @@ test("EBB.BUFFER: four rows per series, one column per product, options as words
   expect(table.map((r) => r[0])).toEqual([engine.forecast, engine.sd, engine.safetyStock, engine.reorderPoint]);
   const damped = stockBuffer(fitModel(hose, { period: 12, seasonality: "additive", trend: "damped" }), { leadTime: 3, serviceLevel: 0.95 });
   expect(block(hf, s, "G11", 4, 1).flat()).toEqual([damped.forecast, damped.sd, damped.safetyStock, damped.reorderPoint]);
-  expect(errorIn(hf, s, "G21").message).toMatch(/type 0.95 for 95%/);
+  expect(errorIn(hf, s, "G21").message).toMatch(/service level must be from 0.5 to 0.9999, or 50 to 99.99 as a percent/);
   expect(errorIn(hf, s, "G31").message).toMatch(/Unknown option word "sideways"/);
 });

@@ -51,7 +51,7 @@ export const bufferCommand: BatchCommand = {
   addOptions(cmd) {
     cmd
       .option("--lead-time <L>", "periods from placing an order to receiving it (required)")
-      .option("--service-level <S>", `cycle service level, such as 0.95 (default: ${DEFAULT_SERVICE_LEVEL})`)
+      .option("--service-level <S>", `cycle service level, such as 0.95 or 95 (default: ${DEFAULT_SERVICE_LEVEL})`)
       .option("--review-period <R>", "periods between stock reviews; 0 for continuous review (default: 0)");
   },
   readOptions: (raw) => ({ ...bufferSettings(raw as BufferOptions) }),

@@ -8,7 +8,7 @@ export interface BufferSettings {
   leadTime: number;
   /** Periods between reviews of the stock (0, the default, for continuous review). */
   reviewPeriod?: number;
-  /** Cycle service level: the chance of no stock-out in a replenishment cycle, 0.5 to 0.9999. */
+  /** Cycle service level: the chance of no stock-out in a replenishment cycle, 0.5 to 0.9999 (or 50 to 99.99 as a percent). */
   serviceLevel: number;
 }
 
@@ -61,13 +61,12 @@ export function checkWholePeriods(v: number, what: string, least: number): numbe
 
 export function checkServiceLevel(v: number): number {
   if (typeof v !== "number" || !Number.isFinite(v)) {
-    throw badInput("bad-service-level", `The service level must be a fraction such as 0.95; got ${String(v)}.`);
+    throw badInput("bad-service-level", `The service level must be a fraction such as 0.95 (or a percent such as 95); got ${String(v)}.`);
   }
-  if (v >= 1 && v < 100) {
-    throw badInput("bad-service-level", `The service level is a fraction: type ${v / 100} for ${v}%.`);
+  // As coverage is read (parseCoverage): 0.95 and 95 both mean 95%.
+  const level = v > 1 && v < 100 ? v / 100 : v;
+  if (!(level >= 0.5 && level <= 0.9999)) {
+    throw badInput("bad-service-level", `The service level must be from 0.5 to 0.9999, or 50 to 99.99 as a percent (for example 0.95: a stock-out in about 1 cycle in 20); got ${v}.`);
   }
-  if (!(v >= 0.5 && v <= 0.9999)) {
-    throw badInput("bad-service-level", `The service level must be from 0.5 to 0.9999 (for example 0.95, a stock-out in 1 cycle in 20); got ${v}.`);
-  }
-  return v;
+  return level;
 }
