@@ -70,25 +70,28 @@ export function fitConstants(
 ): { constants: Constants; sse: number } {
   const axes = freeAxes(seasonality, trend, p, fixed);
   const ws = new RecursionWorkspace(p);
+  // (alpha, beta, gamma, phi) with the fixed values in place; each evaluation writes the free
+  // ones into their slots, so no evaluation allocates.
+  const base = constantsFrom(axes, axes.map((a) => a.usual), fixed, trend);
+  const theta = Float64Array.of(base.alpha, base.beta, base.gamma, base.phi);
+  const slots = Int32Array.from(axes, (a) => a.slot);
+  const place = (x: ArrayLike<number>): void => {
+    for (let i = 0; i < slots.length; i++) theta[slots[i]] = x[i];
+  };
   const objective = (x: ArrayLike<number>): number => {
-    const c = constantsFrom(axes, x, fixed, trend);
-    return sumSquaredErrors(y, start, firstUpdate, p, seasonality, trend, c.alpha, c.beta, c.gamma, c.phi, ws);
+    place(x);
+    return sumSquaredErrors(y, start, firstUpdate, p, seasonality, trend, theta[0], theta[1], theta[2], theta[3], ws);
   };
   if (axes.length === 0) {
     const c = constantsFrom(axes, [], fixed, trend);
     return { constants: c, sse: objective([]) };
   }
   const gws = new GradientWorkspace(p);
-  const theta = new Float64Array(4);
   const full = new Float64Array(4);
   const withGradient = (x: Float64Array, g: Float64Array): number => {
-    const c = constantsFrom(axes, x, fixed, trend);
-    theta[0] = c.alpha;
-    theta[1] = c.beta;
-    theta[2] = c.gamma;
-    theta[3] = c.phi;
+    place(x);
     const f = sseWithGradient(y, start, firstUpdate, p, seasonality, trend, theta, full, gws);
-    for (let i = 0; i < axes.length; i++) g[i] = full[axes[i].slot];
+    for (let i = 0; i < slots.length; i++) g[i] = full[slots[i]];
     return f;
   };
   const best = minimiseWithGradient(objective, withGradient, axes);
@@ -124,14 +127,21 @@ export function minimiseWithGradient(
   const found: Minimum[] = [];
   // A descent that walks into the basin of an optimum already found is stopped early:
   // it would only find the same point again.
-  const known = (x: Float64Array, f: number): boolean =>
-    found.some((m) => f >= m.fx && axes.every((a, i) => Math.abs(x[i] - m.x[i]) <= 0.01 * (a.upper - a.lower)));
-  for (const x0 of starts) found.push(projectedBfgs(withGradient, x0, { lower, upper, maxIter: 200, fTol: 1e-12, abandon: known }));
+  const known = (x: Float64Array, f: number): boolean => {
+    for (const m of found) {
+      if (f < m.fx) continue;
+      let near = true;
+      for (let i = 0; i < x.length && near; i++) near = Math.abs(x[i] - m.x[i]) <= 0.01 * (upper[i] - lower[i]);
+      if (near) return true;
+    }
+    return false;
+  };
+  for (const x0 of starts) found.push(projectedBfgs(withGradient, x0, { lower, upper, maxIter: 200, fTol: 1e-12, abandon: known, f: objective }));
   let best = found.reduce((a, b) => (b.fx < a.fx ? b : a));
   // Fresh descents from the best point (new curvature estimates) finish a stalled one in a
   // long, narrow valley; they stop as soon as one no longer helps.
   for (let k = 0; k < 4; k++) {
-    const polished = projectedBfgs(withGradient, best.x, { lower, upper, maxIter: 200, fTol: 1e-13 });
+    const polished = projectedBfgs(withGradient, best.x, { lower, upper, maxIter: 200, fTol: 1e-13, f: objective });
     const gain = (best.fx - polished.fx) / Math.max(Math.abs(best.fx), 1e-300);
     if (polished.fx < best.fx) best = polished;
     if (!(gain > 1e-12)) break;

@@ -13,7 +13,15 @@ export interface ProjectedBfgsOptions {
   fTol: number;
   /** Optional early stop, asked after every accepted step (e.g. "this basin is known"). */
   abandon?: (x: Float64Array, f: number) => boolean;
+  /**
+   * The objective alone, cheaper than with its gradient: the line search tries points with it
+   * and asks for the gradient only at the point it accepts.
+   */
+  f?: (x: Float64Array) => number;
 }
+
+/** A step that moves no variable by more than this share of its range has converged. */
+const X_TOL = 1e-11;
 
 /**
  * Bounded quasi-Newton minimisation with exact gradients: BFGS on the variables that are
@@ -21,7 +29,9 @@ export interface ProjectedBfgsOptions {
  * "Projected Newton methods for optimization problems with simple constraints", SIAM J.
  * Control Optim. 20(2); BFGS update as in Nocedal & Wright 2006, ch. 6). A variable whose
  * gradient pushes it against its bound is held there, so corner optima are reached exactly.
- * Deterministic; bounded by maxIter.
+ * The line search backtracks by quadratic interpolation and, given the objective alone, tries
+ * points with it (the gradient is computed only where a step is accepted); a step too small to
+ * move any variable ends the search. Deterministic; bounded by maxIter.
  */
 export function projectedBfgs(
   fg: (x: Float64Array, g: Float64Array) => number,
@@ -85,17 +95,29 @@ export function projectedBfgs(
     let accepted = false;
     for (let k = 0; k < 40; k++) {
       let decrease = 0;
+      let moved = 0;
       for (let i = 0; i < d; i++) {
         xn[i] = Math.min(o.upper[i], Math.max(o.lower[i], x[i] + t * dir[i]));
         decrease += g[i] * (xn[i] - x[i]);
+        moved = Math.max(moved, Math.abs(xn[i] - x[i]) / (o.upper[i] - o.lower[i]));
       }
-      fn = fg(xn, gn);
+      // Steps below the variables' resolution cannot lower f any more: converged.
+      if (moved <= X_TOL) break;
+      fn = o.f ? o.f(xn) : fg(xn, gn);
       evals++;
       if (Number.isFinite(fn) && fn <= f + 1e-4 * decrease) {
         accepted = true;
         break;
       }
-      t *= 0.5;
+      // Backtrack to the minimum of the quadratic through f, the slope and fn, kept within
+      // [0.1 t, 0.5 t] (Nocedal & Wright 2006, section 3.5).
+      const quadratic = Number.isFinite(fn) ? (-decrease * t) / (2 * (fn - f - decrease)) : 0.1 * t;
+      t = Math.min(0.5 * t, Math.max(0.1 * t, quadratic));
+    }
+    if (accepted && o.f) {
+      fn = fg(xn, gn);
+      evals++;
+      accepted = Number.isFinite(fn);
     }
     if (!accepted) break;
     let sy = 0;
