@@ -39,7 +39,9 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
     const z = (f.interval.high[0] - f.forecast[0]) / Math.sqrt(sigma2);
     const lost = estimatedQuantities(model.shape);
     basis.push(["variance", `=SUMSQ(${nm(ctx, "errors")})/MAX(1,COUNT(${nm(ctx, "errors")})-${lost})`, sigma2, FORMAT.units]);
-    basis.push(["z", `=NORM.S.INV(0.5+${nm(ctx, "coverage")}/2)`, z, FORMAT.constant]);
+    // Coverage typed as 95 or as 0.95 is the same interval (the engine's parseCoverage rule).
+    const coverage = nm(ctx, "coverage");
+    basis.push(["z", `=NORM.S.INV(0.5+IF(${coverage}>1,${coverage}/100,${coverage})/2)`, z, FORMAT.constant]);
   }
   basis.forEach(([key, formula, value, format], i) => {
     cells.text(o.basisLabelRow, c0 + i, OUTLOOK_BASIS[key].label, "header", OUTLOOK_BASIS[key].note);

@@ -1,4 +1,4 @@
-import { EbbError } from "../../engine";
+import { COVERAGE_FORMS, EbbError, parseCoverage } from "../../engine";
 import { cellAddress } from "../describe/addresses";
 import { describeLedger } from "../describe/describeLedger";
 import type { LedgerAnchor, LedgerCell, LedgerDescription, SettingKey } from "../describe/types";
@@ -65,11 +65,12 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
   // Settings the user may change: must be numbers in range, else recompute with the written value.
   for (const k of [...CONSTANTS, "coverage" as const]) {
     const v = inUse[k];
-    const ok = typeof v === "number" && (k === "coverage" ? v > 0 && v < 1 : v >= 0 && v <= 1);
+    const ok = typeof v === "number" && (k === "coverage" ? coverageFraction(v) !== undefined : v >= 0 && v <= 1);
+    if (ok && k === "coverage") input.coverage = coverageFraction(v as number)!;
     if (!ok) {
       const at = settingCells[k];
       problems.push(
-        problem(at.row, at.col, "setting-invalid", written[k], v, k === "coverage" ? "Coverage must be a fraction between 0 and 1, such as 0.95." : `${k} must be a number from 0 to 1.`),
+        problem(at.row, at.col, "setting-invalid", written[k], v, k === "coverage" ? `Coverage must be ${COVERAGE_FORMS}.` : `${k} must be a number from 0 to 1.`),
       );
       if (k === "coverage") input.coverage = written.coverage as number;
       else input.settings[k as "alpha" | "beta" | "gamma" | "phi"] = written[k] as number;
@@ -190,4 +191,13 @@ function dataScale(history: (number | null)[]): number {
   let c = 0;
   for (const v of history) if (v !== null) { s += Math.abs(v); c++; }
   return c > 0 ? s / c : 1;
+}
+
+/** The coverage cell as a fraction (typed as 95 or 0.95), or undefined when it is neither. */
+function coverageFraction(v: number): number | undefined {
+  try {
+    return parseCoverage(v);
+  } catch {
+    return undefined;
+  }
 }
