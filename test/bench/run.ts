@@ -14,6 +14,7 @@ import { loadavg } from "os";
 import { join } from "path";
 import { CLASSIC, runAccuracy } from "./accuracy";
 import { measureAhead } from "./ahead";
+import { batchBenchmark, renderBatchSection } from "./batch";
 import { describeCode, describeMachine } from "./machine";
 import { evenSample, loadM3 } from "./m3";
 import { renderOrder, runOrderBench } from "./order";
@@ -119,7 +120,9 @@ async function main(): Promise<void> {
   result.peakHeapBytes = memory.peakHeap;
   result.elapsedSeconds = now() - started;
   result.loadAverage = [loadAtStart, loadavg()[0]];
-  const report = renderReport(result) + "\n" + renderOrder(order) + "\n";
+  // The batch command runs last, in child processes of its own, so it does not disturb the timings above.
+  const batch = renderBatchSection(await batchBenchmark(args.quick, progress));
+  const report = renderReport(result) + "\n" + renderOrder(order) + "\n\n" + batch + "\n";
   process.stdout.write(report);
   if (args.out) {
     writeFileSync(args.out, report);
