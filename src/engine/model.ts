@@ -1,4 +1,4 @@
-import { aic, aicc } from "./aicc";
+import { aicc } from "./aicc";
 import { badInput, notEnough } from "./errors";
 import { fitConstants, freeAxes, type ConstantChoice } from "./fit";
 import { checkConstant, checkPeriod, parseSeasonality, parseStart, parseTrend, type SeasonalityChoice, type TrendChoice } from "./options";
@@ -6,7 +6,9 @@ import { detectPeriod } from "./period";
 import { projectState, runRecursion } from "./recursion";
 import { allPositive, cleanHistory, countPresent, requirePositive } from "./series";
 import { classicStart } from "./start/classicStart";
-import { decompositionStart } from "./start/decompositionStart";
+import { decompositionStart, leadingBlanks } from "./start/decompositionStart";
+import { passesSeasonalityTest } from "./seasonalityTest";
+import { lowestAicc, scoreAlike } from "./selection";
 import { optimizedStart } from "./start/optimizedStart";
 import { isSeasonal, modelShape, parameterCount, requiredLength } from "./shape";
 import type { FittedModel, Seasonality, Start, StartMethod, StateTable, TrendKind } from "./types";
@@ -26,14 +28,37 @@ export interface ModelOptions {
 }
 
 /**
- * The trends `auto` chooses between: damped and none. An undamped linear trend carried a year
- * or more ahead over-forecasts turning series; the damped trend was introduced for exactly
- * that (Gardner & McKenzie 1985) and is among the most accurate methods on the M3 data
- * (Makridakis & Hibon 2000; Gardner 2006, IJF 22(4)). Ebb's own M3 benchmark agrees: adding
- * the linear trend to the candidates makes the automatic model less accurate on monthly and
- * quarterly data (test/bench/RESULTS.md). A linear trend is used when asked for by name.
+ * How `auto` chooses. The whole family of exponential smoothing without error distinction:
+ * seasonality none, additive or multiplicative x trend none, linear or damped (the taxonomy of
+ * Pegels 1969, extended by Gardner 1985 and Hyndman et al. 2002, 2008), every candidate scored
+ * on the same one-step errors with its parameters counted ({@link scoreAlike}) and the lowest
+ * AICc taken. Seasonal candidates are considered only when the history passes the 90%
+ * autocorrelation test at the seasonal lag ({@link passesSeasonalityTest}); a series that does
+ * not is given the non-seasonal candidates only, as the M3/M4 benchmarks and the Theta method do.
  */
-export const AUTO_TRENDS: TrendKind[] = ["damped", "none"];
+export interface AutoDesign {
+  trends: TrendKind[];
+  /** Apply the seasonality test before considering seasonal candidates. */
+  seasonalityTest: boolean;
+  /** Keep the non-seasonal candidates beside the seasonal ones when the test finds a season. */
+  noneWhenSeasonal: boolean;
+  /** Non-seasonal candidates start from the same window as seasonal ones (cycles x p periods). */
+  noneSeasonalWindow?: boolean;
+}
+
+/**
+ * The design in use, chosen by rolling-origin evaluation over the M3 training parts
+ * (test/bench/rolling.ts; README "Automatic model"): the test decides between the seasonal
+ * candidates and the non-seasonal ones; the trend is damped or none. Adding the linear trend
+ * or the non-seasonal candidates beside seasonal ones made the monthly forecasts less accurate
+ * there (an undamped trend carried a year or more ahead over-forecasts turning series; the
+ * damped trend was introduced for exactly that, Gardner & McKenzie 1985). A linear trend is
+ * used when asked for by name.
+ */
+export const AUTO_DESIGN: AutoDesign = { trends: ["damped", "none"], seasonalityTest: true, noneWhenSeasonal: false };
+
+/** The trends `auto` chooses between. */
+export const AUTO_TRENDS: TrendKind[] = AUTO_DESIGN.trends;
 
 /** Resolve the season length: a typed one, or detected from the history. */
 export function resolvePeriod(y: Float64Array, period: number | undefined): number {
@@ -45,7 +70,7 @@ export function resolvePeriod(y: Float64Array, period: number | undefined): numb
  * Fit a model to a history. With seasonality or trend "auto", every candidate is fitted on
  * the same update window and the one with the lowest AICc is returned.
  */
-export function fitModel(history: ArrayLike<number | null | undefined>, options: ModelOptions = {}): FittedModel {
+export function fitModel(history: ArrayLike<number | null | undefined>, options: ModelOptions = {}, design: AutoDesign = AUTO_DESIGN): FittedModel {
   const y = history instanceof Float64Array ? history : cleanHistory(history);
   if (countPresent(y) === 0) throw notEnough(1, 0);
   const p = resolvePeriod(y, options.period);
@@ -60,40 +85,33 @@ export function fitModel(history: ArrayLike<number | null | undefined>, options:
   const start = parseStart(options.start);
   const cycles = options.cycles ?? 2;
   const seasonalities =
-    options.seasonality === "none" ? (["none"] as Seasonality[]) : seasonalityCandidates(y, p, parseSeasonality(options.seasonality));
+    options.seasonality === "none" ? (["none"] as Seasonality[]) : seasonalityCandidates(y, p, parseSeasonality(options.seasonality), design);
   const trendChoice = parseTrend(options.trend);
-  const trends: TrendKind[] = trendChoice === "auto" ? AUTO_TRENDS : [trendChoice];
+  const trends: TrendKind[] = trendChoice === "auto" ? design.trends : [trendChoice];
   if (seasonalities.length * trends.length === 1) return fitOne(y, p, seasonalities[0], trends[0], start, cycles, fixed);
-  let best: FittedModel | undefined;
+  const fitted: FittedModel[] = [];
   let firstError: unknown;
   for (const s of seasonalities) {
     for (const t of trends) {
-      let m: FittedModel;
       try {
-        m = fitOne(y, p, s, t, start, cycles, fixed);
+        const c = design.noneSeasonalWindow && s === "none" && p >= 2 && start === "decomposition" ? cycles * p : cycles;
+        fitted.push(fitOne(y, p, s, t, start, c, fixed));
       } catch (e) {
         firstError ??= e;
-        continue;
       }
-      if (!best || better(m, best)) best = m;
     }
   }
-  if (!best) throw firstError;
-  return best;
+  if (fitted.length === 0) throw firstError;
+  return lowestAicc(scoreAlike(fitted));
 }
 
-function better(a: FittedModel, b: FittedModel): boolean {
-  const fa = Number.isFinite(a.aicc);
-  const fb = Number.isFinite(b.aicc);
-  if (fa && fb) return a.aicc < b.aicc;
-  if (fa !== fb) return fa;
-  // Too little history for AICc's correction in either: AIC, its large-sample form.
-  return aic(a.sse, a.errorCount, a.parameterCount) < aic(b.sse, b.errorCount, b.parameterCount);
-}
-
-function seasonalityCandidates(y: Float64Array, p: number, choice: SeasonalityChoice): Seasonality[] {
+function seasonalityCandidates(y: Float64Array, p: number, choice: SeasonalityChoice, design: AutoDesign): Seasonality[] {
   if (!isSeasonal("additive", p)) return ["none"];
-  if (choice === "auto") return allPositive(y) ? ["multiplicative", "additive"] : ["additive"];
+  if (choice === "auto") {
+    if (design.seasonalityTest && !passesSeasonalityTest(y, p)) return ["none"];
+    const seasonal: Seasonality[] = allPositive(y) ? ["multiplicative", "additive"] : ["additive"];
+    return design.noneWhenSeasonal ? [...seasonal, "none"] : seasonal;
+  }
   if (choice === "multiplicative") requirePositive(y);
   return [choice];
 }
@@ -112,12 +130,13 @@ export function fitOne(
   const shape = modelShape({ period: p, seasonality, trend, start: startMethod, cycles });
   const free = freeAxes(seasonality, trend, p, fixed).length;
   const needed = requiredLength(shape, free);
-  if (y.length < needed) {
+  const usable = startMethod === "decomposition" ? y.length - leadingBlanks(y) : y.length;
+  if (usable < needed) {
     const advice =
       startMethod === "classic"
         ? "The classic start uses two full seasons before the first update; add more history."
         : `${!shape.seasonal ? "The start" : `The start window (${cycles} seasons of ${p})`} comes first${free > 0 ? ", and fitting the constants needs a few periods after it" : ""}; add more history.`;
-    throw notEnough(needed, y.length, "values", advice);
+    throw notEnough(needed, usable, usable < y.length ? "values from the first value present" : "values", advice);
   }
   let start: Start;
   let constants;

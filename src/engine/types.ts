@@ -60,6 +60,10 @@ export interface StartDetail {
   slope: number;
   /** What the regression's x counts: "period" (1-based period of the series) or "ma-rank" (1..k over existing moving-average values). */
   regressionX: "period" | "ma-rank";
+  /** Leading blanks skipped: the window begins with period skipped + 1 (absent when none). */
+  skipped?: number;
+  /** Blanks of the window filled before the decomposition: 0-based periods and the values used (absent when none). */
+  filled?: { at: number[]; values: number[] };
 }
 
 /** Everything that identifies a model specification. */

@@ -117,3 +117,32 @@ export function compareSse(rRun: ReferenceRun, ebbSse: Record<"multiplicative" |
     };
   });
 }
+
+export interface ForecastPackageSummary {
+  run: ReferenceRun;
+  seconds: Record<"ets" | "theta", { monthly: number[]; quarterly: number[] }>;
+  failures: number;
+}
+
+/** R's forecast package (ets, thetaf): scored as "fc-ets" and "fc-theta" by the same code. */
+export function scoreForecastPackage(run: ReferenceRun, series: M3Series[], board: Scoreboard, coverage: CoverageTally): ForecastPackageSummary {
+  const summary: ForecastPackageSummary = { run, seconds: { ets: { monthly: [], quarterly: [] }, theta: { monthly: [], quarterly: [] } }, failures: 0 };
+  if (run.skipped) return summary;
+  const byKey = new Map(run.fits.map((f) => [`${f.id}|${f.seasonality}`, f]));
+  for (const s of series) {
+    for (const method of ["ets", "theta"] as const) {
+      const f = byKey.get(`${s.id}|${method}`);
+      const key = `fc-${method}`;
+      if (!usable(f, s.horizon)) {
+        summary.failures++;
+        board.add(key, s, seasonalNaive(s.train, s.period, s.horizon));
+        board.noteStandIn(key);
+        continue;
+      }
+      summary.seconds[method][s.frequency].push(f.seconds);
+      board.add(key, s, f.forecast);
+      tallyIntervals(coverage, key, s, f);
+    }
+  }
+  return summary;
+}

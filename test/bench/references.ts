@@ -9,10 +9,12 @@ import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from "fs
 import { tmpdir } from "os";
 import { join } from "path";
 import type { M3Series } from "./m3";
+import { cacheKey, readCached, writeCached } from "./referenceCache";
 
 export interface ReferenceFit {
   id: string;
-  seasonality: "multiplicative" | "additive";
+  /** The model run: a seasonality for the Holt-Winters references, "ets" or "theta" for R's forecast package. */
+  seasonality: "multiplicative" | "additive" | "ets" | "theta";
   seconds: number;
   /** NaN when the fit failed. */
   sse: number;
@@ -34,6 +36,8 @@ export interface ReferenceRun {
   fits: ReferenceFit[];
   /** Set when the program could not be run at all. */
   skipped?: string;
+  /** Set when the outputs came from the cache (the file read). */
+  cached?: string;
 }
 
 export const RSCRIPT = process.env.RSCRIPT ?? "/usr/bin/Rscript";
@@ -84,12 +88,51 @@ function runProgram(name: string, program: string, script: string, input: string
   return { name, ...parseOutput(readFileSync(output, "utf8")) };
 }
 
+/** Only the training parts leave the bench: the references never see the held-out values. */
+export function referenceInput(series: M3Series[]): string {
+  return series.map((s) => `${s.id},${s.period},${s.horizon},${Array.from(s.train, String).join(" ")}`).join("\n") + "\n";
+}
+
+/** R and the forecast package's versions, or undefined when either is missing. */
+function forecastPackageVersion(): string | undefined {
+  if (!existsSync(RSCRIPT)) return undefined;
+  const r = spawnSync(RSCRIPT, ["--vanilla", "-e", 'cat(R.version.string, "; forecast ", as.character(packageVersion("forecast")), sep = "")'], {
+    encoding: "utf8",
+  });
+  return r.status === 0 && r.stdout.includes("forecast") ? r.stdout.trim() : undefined;
+}
+
+const FORECAST_NAME = "R forecast";
+const FORECAST_SCRIPT = "forecast_bench.R";
+
+/**
+ * R's forecast package (ets and thetaf), from the cache when the same script has run on the
+ * same series with the same versions; otherwise run (about 20 minutes on M3) and cached.
+ */
+export function runForecastPackage(series: M3Series[]): ReferenceRun {
+  const version = forecastPackageVersion();
+  if (!version) return { name: FORECAST_NAME, version: "", fits: [], skipped: `R's forecast package not found (${RSCRIPT}; Debian r-cran-forecast)` };
+  const text = referenceInput(series);
+  const key = cacheKey(FORECAST_SCRIPT, text, version);
+  const hit = readCached(FORECAST_NAME, key);
+  if (hit !== undefined) return { name: FORECAST_NAME, ...parseOutput(hit), cached: key };
+  const dir = mkdtempSync(join(tmpdir(), "ebb-bench-ref-"));
+  try {
+    const input = join(dir, "series.csv");
+    writeFileSync(input, text);
+    const run = runProgram(FORECAST_NAME, RSCRIPT, FORECAST_SCRIPT, input, dir, ["--vanilla"]);
+    if (!run.skipped) writeCached(FORECAST_NAME, key, readFileSync(join(dir, `${FORECAST_NAME.replace(/\W+/g, "-")}.csv`), "utf8"));
+    return run;
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
 export function runReferences(series: M3Series[]): ReferenceRun[] {
   const dir = mkdtempSync(join(tmpdir(), "ebb-bench-ref-"));
   try {
     const input = join(dir, "series.csv");
-    // Only the training parts leave the bench: the references never see the held-out values.
-    writeFileSync(input, series.map((s) => `${s.id},${s.period},${s.horizon},${Array.from(s.train, String).join(" ")}`).join("\n") + "\n");
+    writeFileSync(input, referenceInput(series));
     return [
       runProgram("base R HoltWinters", RSCRIPT, "holtwinters_bench.R", input, dir, ["--vanilla"]),
       runProgram("statsmodels ExponentialSmoothing", PYTHON, "statsmodels_bench.py", input, dir),

@@ -9,7 +9,9 @@ type Times = { monthly: number[]; quarterly: number[] };
 
 function header(r: BenchResult): string {
   const m = r.machine;
-  const refs = (r.references ?? []).map((s) => `- ${s.run.name}: ${s.run.skipped ? `skipped (${s.run.skipped})` : s.run.version}`);
+  const refs = [...(r.references ?? []).map((s) => s.run), ...(r.forecastPackage ? [r.forecastPackage.run] : [])].map(
+    (run) => `- ${run.name}: ${run.skipped ? `skipped (${run.skipped})` : run.version}${run.cached ? " (outputs from the cache)" : ""}`,
+  );
   return [
     `# Ebb benchmark results`,
     "",
@@ -67,6 +69,9 @@ function speedSection(r: BenchResult): string {
     if (ref.run.skipped) continue;
     const name = ref.prefix === "r" ? "base R HoltWinters" : "statsmodels ES";
     rows.push([`${name} mult.`, ref.seconds.multiplicative], [`${name} add.`, ref.seconds.additive]);
+  }
+  if (r.forecastPackage && !r.forecastPackage.run.skipped) {
+    rows.push(["R forecast ets (fit and forecast)", r.forecastPackage.seconds.ets], ["R forecast thetaf", r.forecastPackage.seconds.theta]);
   }
   const all = (x: Times) => [...x.monthly, ...x.quarterly];
   const fitTable = markdownTable(
@@ -207,7 +212,7 @@ function accuracySection(r: BenchResult): string {
 
 function coverageSection(r: BenchResult): string {
   const rows: string[][] = [];
-  const keys = ["ebb-auto", "ebb-auto-mult-chosen", "ebb-auto-add-chosen", ...(r.references ? ["r-mult", "r-add", "r-best"] : [])];
+  const keys = ["ebb-auto", "ebb-auto-mult-chosen", "ebb-auto-add-chosen", ...(r.references ? ["r-mult", "r-add", "r-best", "fc-ets", "fc-theta"] : [])];
   for (const key of keys) {
     for (const f of ["monthly", "quarterly"] as const) {
       const bands = bandsFor(f);

@@ -2,7 +2,7 @@
 import type { AccuracyRun } from "./accuracy";
 import type { AheadRow } from "./ahead";
 import type { Machine } from "./machine";
-import type { ReferenceSummary, SseComparison } from "./referenceScoring";
+import type { ForecastPackageSummary, ReferenceSummary, SseComparison } from "./referenceScoring";
 import type { CoverageTally, Scoreboard } from "./scoring";
 import type { ThroughputResult } from "./throughput";
 
@@ -18,6 +18,8 @@ export interface BenchResult {
   coverage: CoverageTally;
   /** Absent when the run was not asked for references. */
   references?: ReferenceSummary[];
+  /** R's forecast package (ets, thetaf); absent without --references. */
+  forecastPackage?: ForecastPackageSummary;
   /** Absent when base R was not run. */
   sse?: SseComparison[];
   /** Why a reference program was skipped, when it was. */
@@ -49,6 +51,8 @@ export const METHOD_LABELS: [string, string][] = [
   ["sm-mult", "statsmodels ES mult."],
   ["sm-add", "statsmodels ES add."],
   ["sm-best", "statsmodels ES, better SSE"],
+  ["fc-ets", "R forecast ets (automatic ETS, AICc)"],
+  ["fc-theta", "R forecast thetaf (Theta method)"],
   ["snaive", "Seasonal naive"],
   ["naive2", "Naive2"],
 ];

@@ -19,8 +19,8 @@ import { describeCode, describeMachine } from "./machine";
 import { evenSample, loadM3 } from "./m3";
 import { renderOrder, runOrderBench } from "./order";
 import { Progress } from "./progress";
-import { compareSse, scoreReference } from "./referenceScoring";
-import { runReferences } from "./references";
+import { compareSse, scoreForecastPackage, scoreReference } from "./referenceScoring";
+import { runForecastPackage, runReferences } from "./references";
 import { renderReport } from "./report";
 import type { BenchResult } from "./result";
 import { CoverageTally, Scoreboard } from "./scoring";
@@ -29,7 +29,8 @@ import { MemoryWatch, now } from "./timing";
 
 const USAGE = `Usage: npm run bench -- [--quick] [--references] [--out FILE]
   --quick        a small sample (60 monthly + 40 quarterly series), under a minute; writes no file unless --out
-  --references   also run base R stats::HoltWinters (/usr/bin/Rscript) and statsmodels (/usr/bin/python3)
+  --references   also run base R stats::HoltWinters (/usr/bin/Rscript), statsmodels (/usr/bin/python3) and
+                 R's forecast package (ets, thetaf; ~20 min on M3, cached under test/bench/references/cache)
   --out FILE     where to write the markdown (default test/bench/RESULTS.md for a full run)`;
 
 interface Args {
@@ -108,6 +109,11 @@ async function main(): Promise<void> {
     const [r, sm] = runReferences(series);
     result.references = [scoreReference("r", r, series, board, coverage), scoreReference("sm", sm, series, board, coverage)];
     for (const run of [r, sm]) if (run.skipped) result.referenceNotes.push(`${run.name} skipped: ${run.skipped}`);
+    progress.note("references: R forecast package (ets, thetaf), from its cache when the same script, series and versions ran before");
+    const fc = runForecastPackage(series);
+    result.forecastPackage = scoreForecastPackage(fc, series, board, coverage);
+    if (fc.skipped) result.referenceNotes.push(`${fc.name} skipped: ${fc.skipped}`);
+    else if (fc.cached) result.referenceNotes.push(`${fc.name}: outputs read from the cache (key ${fc.cached}); its timings are those of the run that filled it`);
     if (!r.skipped) {
       const [mult, add] = CLASSIC.map((m) => accuracy.sse.get(m.key)!);
       result.sse = compareSse(r, { multiplicative: mult, additive: add });

@@ -84,5 +84,28 @@ export function checkTargets(r: BenchResult): TargetCheck[] {
     checks.push(accuracy(r, f, "seasonal naive and Naive2", ["snaive", "naive2"]));
   }
   checks.push(coverage(r, 0.95, 93, 97), coverage(r, 0.8, 77, 83));
+  for (const f of ["monthly", "quarterly"] as const) checks.push(goal(r, f));
+  for (const f of ["monthly", "quarterly"] as const) checks.push(coverageOf(r, f, 0.95, 93, 97), coverageOf(r, f, 0.8, 77, 83));
   return checks;
+}
+
+/** The accuracy goal of the automatic model (issue 10): beyond the references' frontier on M3. */
+const GOAL = { monthly: { smape: 13.7, mase: 0.855 }, quarterly: { smape: 9.1, mase: 1.1 } } as const;
+
+function goal(r: BenchResult, f: "monthly" | "quarterly"): TargetCheck {
+  const g = GOAL[f];
+  const target = `Goal, M3 ${f}: Ebb auto's mean sMAPE < ${g.smape} and MASE < ${g.mase}`;
+  const mine = r.board.scores("ebb-auto", f)?.[0];
+  if (!mine) return { target, figure: "not run", status: "not measured" };
+  const met = mine.smape < g.smape && mine.mase < g.mase;
+  const gap = met ? "" : `; distance: sMAPE ${Math.max(0, mine.smape - g.smape).toFixed(2)}, MASE ${Math.max(0, mine.mase - g.mase).toFixed(3)}`;
+  return { target, figure: `sMAPE ${mine.smape.toFixed(2)}, MASE ${mine.mase.toFixed(4)}${gap}`, status: met ? "met" : "missed" };
+}
+
+function coverageOf(r: BenchResult, f: "monthly" | "quarterly", c: number, lo: number, hi: number): TargetCheck {
+  const target = `M3 ${f}: ${c * 100}% intervals cover ${lo}%-${hi}% of holdout actuals`;
+  const band = f === "monthly" ? "1-18" : "1-8";
+  const share = r.coverage.share("ebb-auto", f, c, band);
+  if (share === undefined) return { target, figure: "not run", status: "not measured" };
+  return { target, figure: `Ebb auto: ${(share * 100).toFixed(1)}%`, status: share * 100 >= lo && share * 100 <= hi ? "met" : "missed" };
 }

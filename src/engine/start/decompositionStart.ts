@@ -2,6 +2,7 @@ import { classicalIndices, leastSquaresLine } from "../decompose";
 import { badInput, notEnough } from "../errors";
 import type { Seasonality, Start, TrendKind } from "../types";
 import { modelShape } from "../shape";
+import { fillStartGaps } from "./fillGaps";
 
 /**
  * Ebb's default start: classical decomposition over the first `cycles` full seasons.
@@ -11,6 +12,11 @@ import { modelShape } from "../shape";
  * the trend its slope (no trend: the window's deseasonalised mean). Updating begins with
  * period cycles*p + 1. Method: classical decomposition as described by Makridakis,
  * Wheelwright & Hyndman (1998), Forecasting: Methods and Applications, ch. 4.
+ *
+ * Blanks: leading blanks are skipped (an item launched mid-year), so the window begins with
+ * the first value present and updating begins `skipped` periods later; blanks inside the
+ * window are filled by seasonally adjusted linear interpolation ({@link fillStartGaps}) before
+ * the decomposition. `detail.skipped` and `detail.filled` say what was done.
  */
 export function decompositionStart(
   y: Float64Array,
@@ -25,8 +31,10 @@ export function decompositionStart(
   const shape = modelShape({ period: p, seasonality, trend, start: "decomposition", cycles });
   const seasonal = shape.seasonal;
   const window = shape.startWindow;
-  if (y.length < window) throw notEnough(window, y.length);
-  const w = y.subarray(0, window);
+  const skipped = leadingBlanks(y);
+  if (y.length - skipped < window) throw notEnough(window, y.length - skipped, "values from the first value present");
+  const gaps = fillStartGaps(y.subarray(skipped, skipped + window), p, seasonality, seasonal);
+  const w = gaps.values;
   const x = new Float64Array(window);
   for (let t = 0; t < window; t++) x[t] = t + 1;
 
@@ -78,6 +86,16 @@ export function decompositionStart(
   base.intercept = intercept;
   base.slope = slope;
   base.adjusted = deseasonalised;
-  // Window length is a whole number of seasons, so the next period has position 0.
-  return { method: "decomposition", state: { level, trend: slope, indices }, firstUpdate: shape.firstUpdate, detail: base };
+  if (skipped > 0) base.skipped = skipped;
+  if (gaps.filled.length > 0) base.filled = { at: gaps.filled.map((t) => t + skipped), values: gaps.filled.map((t) => w[t]) };
+  // Window length is a whole number of seasons, so the period after it has the window's first
+  // position: indices[k] serves period firstUpdate + k.
+  return { method: "decomposition", state: { level, trend: slope, indices }, firstUpdate: shape.firstUpdate + skipped, detail: base };
+}
+
+/** Blanks before the first value present. */
+export function leadingBlanks(y: Float64Array): number {
+  let k = 0;
+  while (k < y.length && Number.isNaN(y[k])) k++;
+  return k;
 }
