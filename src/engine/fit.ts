@@ -55,7 +55,7 @@ export function constantsFrom(axes: Axis[], x: ArrayLike<number>, fixed: Constan
 /**
  * Smoothing constants minimising the sum of squared one-step errors from a given start.
  * Search: a bounded quasi-Newton descent with exact gradients from the usual starting point
- * (alpha 0.3, beta 0.1, gamma 0.1) and from the two best points of a coarse grid; the best
+ * (alpha 0.3, beta 0.1, gamma 0.1) and from the best START_POINTS (5) points of a coarse grid; the best
  * result wins. Several starts guard against the local stops a single descent makes on the
  * flat, bounded surfaces these errors have; everything is deterministic.
  */

@@ -55,6 +55,27 @@ export interface FunctionSpec {
   run: (...args: unknown[]) => Output;
 }
 
+/** An implementation taking one `unknown` per parameter (it coerces its own inputs). */
+type RunFor<P extends readonly ParamSpec[]> = (...args: { [K in keyof P]: unknown }) => Output;
+/** F itself when it takes exactly as many arguments as P lists, otherwise never. */
+type SameArity<P extends readonly ParamSpec[], F extends RunFor<P>> = Parameters<F>["length"] extends P["length"]
+  ? P["length"] extends Parameters<F>["length"]
+    ? F
+    : never
+  : never;
+
+/**
+ * One catalog entry, checked by the compiler: the implementation must take one argument per
+ * parameter, no more and no fewer, each `unknown`. A parameter list and an implementation that
+ * disagree fail to compile (the `run` property becomes `never`).
+ */
+export function defineFunction<const P extends readonly ParamSpec[], F extends RunFor<P>>(
+  spec: Omit<FunctionSpec, "params" | "run"> & { params: P; run: F & SameArity<P, F> },
+): FunctionSpec {
+  // The one widening cast: callers pass exactly params.length arguments (invoke.ts pads them).
+  return { ...spec, params: [...spec.params], run: spec.run as unknown as FunctionSpec["run"] };
+}
+
 // ---- sizes of spilled results -------------------------------------------------------------
 
 const NONE: ArgShape = { rows: 1, cols: 1, omitted: true };
@@ -141,34 +162,29 @@ const FORECAST: ParamSpec = {
   help: "Forecasts for the same periods, the same size as actual. Blank cells are skipped.",
 };
 
-const measure = (name: string, description: string, run: (a: unknown, f: unknown) => number): FunctionSpec => ({
-  name,
-  description,
-  params: [ACTUAL, FORECAST],
-  result: "scalar",
-  run: run as FunctionSpec["run"],
-});
+const measure = (name: string, description: string, run: (actual: unknown, forecast: unknown) => number): FunctionSpec =>
+  defineFunction({ name, description, params: [ACTUAL, FORECAST], result: "scalar", run });
 
 // ---- the table ---------------------------------------------------------------------------
 
 export const CATALOG: FunctionSpec[] = [
-  {
+  defineFunction({
     name: "PERIOD",
     description: "Detected season length of each series (1 when no season is found).",
     params: [HISTORY],
     result: "matrix",
     size: perSeries(() => 1, 1),
-    run: periodFn as FunctionSpec["run"],
-  },
-  {
+    run: periodFn,
+  }),
+  defineFunction({
     name: "INDICES",
     description: "Seasonal indices by classical decomposition over all full seasons; the first index belongs to the first row of the history.",
     params: [HISTORY, PERIOD, FIXED_SEASONALITY],
     result: "matrix",
     size: perSeries((a) => indexRows(arg(a, 0), arg(a, 1)), 1),
-    run: indicesFn as FunctionSpec["run"],
-  },
-  {
+    run: indicesFn,
+  }),
+  defineFunction({
     name: "INIT",
     description: "Start state from the first seasons: start level, start trend, then the p start indices.",
     params: [
@@ -179,9 +195,9 @@ export const CATALOG: FunctionSpec[] = [
     ],
     result: "matrix",
     size: perSeries((a) => 2 + indexRows(arg(a, 0), arg(a, 1)), 1),
-    run: initFn as FunctionSpec["run"],
-  },
-  {
+    run: initFn,
+  }),
+  defineFunction({
     name: "STEP",
     description: "One Holt-Winters update: new level, new trend, new index, the forecast made for this period, and its error.",
     params: [
@@ -197,9 +213,9 @@ export const CATALOG: FunctionSpec[] = [
     ],
     result: "matrix",
     size: () => ({ rows: 1, cols: 5 }),
-    run: stepFn as FunctionSpec["run"],
-  },
-  {
+    run: stepFn,
+  }),
+  defineFunction({
     name: "PROJECT",
     description: "Forecasts for the next periods from a state: level, trend and the last p seasonal indices.",
     params: [
@@ -215,43 +231,43 @@ export const CATALOG: FunctionSpec[] = [
       const h = horizonRows(arg(a, 3));
       return h === undefined ? undefined : { rows: h, cols: 1 };
     },
-    run: projectFn as FunctionSpec["run"],
-  },
-  {
+    run: projectFn,
+  }),
+  defineFunction({
     name: "FIT",
     description:
       "Fitted model of each series: seasonality and trend used, alpha, beta, gamma, phi, sum of squared errors, RMSE and AICc (one column per series).",
     params: [HISTORY, PERIOD, SEASONALITY, TREND, START],
     result: "matrix",
     size: perSeries(() => 9, 1),
-    run: fitFn as FunctionSpec["run"],
-  },
-  {
+    run: fitFn,
+  }),
+  defineFunction({
     name: "STATES",
     description:
       "Level, trend, seasonal index, one-step forecast and error for every period (five columns per series; blank in the start window).",
     params: [HISTORY, PERIOD, ALPHA, BETA, GAMMA, SEASONALITY, TREND, PHI, START],
     result: "matrix",
     size: perSeries((a) => seriesLength(arg(a, 0)), 5),
-    run: statesFn as FunctionSpec["run"],
-  },
-  {
+    run: statesFn,
+  }),
+  defineFunction({
     name: "FITTED",
     description: "One-step forecasts aligned with the history (blank in the start window), one column per series.",
     params: [HISTORY, PERIOD, ALPHA, BETA, GAMMA, SEASONALITY, TREND, PHI, START],
     result: "matrix",
     size: perSeries((a) => seriesLength(arg(a, 0)), 1),
-    run: fittedFn as FunctionSpec["run"],
-  },
-  {
+    run: fittedFn,
+  }),
+  defineFunction({
     name: "AHEAD",
     description: "Forecasts for the next periods after the history, one column per series.",
     params: [HISTORY, PERIOD, HORIZON, SEASONALITY, TREND, ALPHA, BETA, GAMMA, PHI],
     result: "matrix",
     size: perSeries((a) => horizonRows(arg(a, 2)), 1),
-    run: aheadFn as FunctionSpec["run"],
-  },
-  {
+    run: aheadFn,
+  }),
+  defineFunction({
     name: "BAND",
     description: "Prediction interval for the next periods: low and high, two columns per series.",
     params: [
@@ -264,9 +280,9 @@ export const CATALOG: FunctionSpec[] = [
     ],
     result: "matrix",
     size: perSeries((a) => horizonRows(arg(a, 2)), 2),
-    run: bandFn as FunctionSpec["run"],
-  },
-  {
+    run: bandFn,
+  }),
+  defineFunction({
     name: "BACKTEST",
     description: "Rolling-origin test: per step ahead, MAD, MAPE, MASE and the number of origins scored (four columns per series).",
     params: [
@@ -279,8 +295,8 @@ export const CATALOG: FunctionSpec[] = [
     ],
     result: "matrix",
     size: perSeries((a) => horizonRows(arg(a, 2)), 4),
-    run: backtestFn as FunctionSpec["run"],
-  },
+    run: backtestFn,
+  }),
   measure("MAD", "Mean absolute deviation of the forecast errors (error = actual - forecast).", madFn),
   measure("MSE", "Mean squared forecast error.", mseFn),
   measure("RMSE", "Root mean squared forecast error.", rmseFn),
@@ -288,22 +304,22 @@ export const CATALOG: FunctionSpec[] = [
   measure("SMAPE", "Symmetric mean absolute percentage error (M3 competition form), in percent.", smapeFn),
   measure("BIAS", "Mean forecast error (actual - forecast); positive means forecasts ran low.", biasFn),
   measure("THEILU", "Theil's U2: below 1 the forecasts beat the no-change forecast.", theilUFn),
-  {
+  defineFunction({
     name: "MASE",
     description: "Mean absolute scaled error: MAD divided by the in-sample MAD of the seasonal naive forecast on the history.",
     params: [ACTUAL, FORECAST, { ...HISTORY, help: "In-sample history the forecasts were made from, oldest first." }, PERIOD],
     result: "scalar",
-    run: maseFn as FunctionSpec["run"],
-  },
-  {
+    run: maseFn,
+  }),
+  defineFunction({
     name: "TRACKING",
     description: "Running tracking signal (running sum of errors over running MAD); beyond +/-4 suggests a biased forecast.",
     params: [ACTUAL, FORECAST],
     result: "matrix",
     size: (a) => ({ rows: arg(a, 0).rows * arg(a, 0).cols, cols: 1 }),
-    run: trackingFn as FunctionSpec["run"],
-  },
-  {
+    run: trackingFn,
+  }),
+  defineFunction({
     name: "ACCURACY",
     description: "Table of accuracy measures: measure name and value (MASE too when a history is given).",
     params: [
@@ -314,9 +330,9 @@ export const CATALOG: FunctionSpec[] = [
     ],
     result: "matrix",
     size: (a) => ({ rows: arg(a, 2).omitted ? 8 : 9, cols: 2 }),
-    run: accuracyFn as FunctionSpec["run"],
-  },
-  {
+    run: accuracyFn,
+  }),
+  defineFunction({
     name: "CORRECTED",
     description:
       "The history with each non-blank correction used in place of its actual (same size as the history); nest it in any function that takes a history. The actuals stay as typed.",
@@ -330,9 +346,9 @@ export const CATALOG: FunctionSpec[] = [
     ],
     result: "matrix",
     size: (a) => ({ rows: arg(a, 0).rows, cols: arg(a, 0).cols }),
-    run: correctedFn as FunctionSpec["run"],
-  },
-  {
+    run: correctedFn,
+  }),
+  defineFunction({
     name: "UNUSUAL",
     description:
       'Periods whose one-step error is unusually large for the automatic model: a flag ("high" or "low") and a suggested replacement (the one-step forecast), two columns per series. It suggests; it never changes the history.',
@@ -348,9 +364,9 @@ export const CATALOG: FunctionSpec[] = [
     ],
     result: "matrix",
     size: perSeries((a) => seriesLength(arg(a, 0)), 2),
-    run: unusualFn as FunctionSpec["run"],
-  },
-  {
+    run: unusualFn,
+  }),
+  defineFunction({
     name: "BUFFER",
     description:
       "Safety stock from the model's own error growth, per series: demand forecast over the lead time (plus review period), the standard deviation of its error, the safety stock and the reorder point (four rows, one column per series). Review stock levels against supplier terms, shelf life and your own policy.",
@@ -369,8 +385,8 @@ export const CATALOG: FunctionSpec[] = [
     ],
     result: "matrix",
     size: perSeries(() => 4, 1),
-    run: bufferFn as FunctionSpec["run"],
-  },
+    run: bufferFn,
+  }),
 ];
 
 /** A function's spec by its name inside the namespace. */

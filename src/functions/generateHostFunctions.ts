@@ -5,7 +5,7 @@
  *
  *     npx tsx src/functions/generateHostFunctions.ts     # rewrites src/functions/functions.ts
  *
- * test/functions/host-source.test.ts fails when functions.ts and the catalog drift apart.
+ * test/functions/metadata.test.ts fails when functions.ts and the catalog drift apart.
  */
 import { writeFileSync } from "fs";
 import { join } from "path";
