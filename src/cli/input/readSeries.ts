@@ -64,11 +64,7 @@ export async function readSeriesTable(file: string, options: ReadOptions = {}): 
   const done = new Promise<SeriesTable>((resolve, reject) => {
     const fail = (e: unknown) => {
       input.destroy();
-      try {
-        reject(readFailure(e, file, source));
-      } catch (err) {
-        reject(err);
-      }
+      reject(readFailure(e, file, source));
     };
     const start = (complete: boolean) => {
       try {
