@@ -3,6 +3,7 @@ import { bandsFor, type Frequency } from "./m3";
 import { labelOf, METHOD_LABELS, type BenchResult } from "./result";
 import { fixed, markdownTable, ms, percent } from "./table";
 import { checkTargets } from "./targets";
+import { workbookSection } from "./workbookReport";
 import { mean, median, p95 } from "./timing";
 
 type Times = { monthly: number[]; quarterly: number[] };
@@ -239,5 +240,5 @@ function coverageSection(r: BenchResult): string {
 }
 
 export function renderReport(r: BenchResult): string {
-  return [header(r), targetsSection(r), speedSection(r), accuracySection(r), coverageSection(r)].join("\n\n") + "\n";
+  return [header(r), targetsSection(r), speedSection(r), workbookSection(r.workbook), accuracySection(r), coverageSection(r)].join("\n\n") + "\n";
 }

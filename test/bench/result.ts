@@ -1,6 +1,7 @@
 /** Everything one bench run measured, as the report and the target check read it. */
 import type { AccuracyRun } from "./accuracy";
 import type { AheadRow } from "./ahead";
+import type { WorkbookResult } from "./workbook";
 import type { Machine } from "./machine";
 import type { ForecastPackageSummary, ReferenceSummary, SseComparison } from "./referenceScoring";
 import type { CoverageTally, Scoreboard } from "./scoring";
@@ -25,6 +26,8 @@ export interface BenchResult {
   /** Why a reference program was skipped, when it was. */
   referenceNotes: string[];
   ahead: AheadRow;
+  /** The planning workbook on the embedded formula engine (absent in runs from before it existed). */
+  workbook?: WorkbookResult;
   maxRssBytes: number;
   peakHeapBytes: number;
   elapsedSeconds: number;

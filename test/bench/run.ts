@@ -26,6 +26,7 @@ import type { BenchResult } from "./result";
 import { CoverageTally, Scoreboard } from "./scoring";
 import { measureThroughput } from "./throughput";
 import { MemoryWatch, now } from "./timing";
+import { measureWorkbook } from "./workbook";
 
 const USAGE = `Usage: npm run bench -- [--quick] [--references] [--out FILE]
   --quick        a small sample (60 monthly + 40 quarterly series), under a minute; writes no file unless --out
@@ -85,6 +86,9 @@ async function main(): Promise<void> {
   const ahead = await measureAhead(allMonthly);
   memory.sample();
 
+  const workbook = measureWorkbook(allMonthly, args.quick ? [100] : [100, 500, 2000], args.quick ? 100 : 2000, (m) => progress.note(m));
+  memory.sample();
+
   const result: BenchResult = {
     date: new Date().toISOString().replace("T", " ").slice(0, 16) + " UTC",
     mode: args.quick ? "quick" : "full",
@@ -97,6 +101,7 @@ async function main(): Promise<void> {
     coverage,
     referenceNotes: [],
     ahead,
+    workbook,
     maxRssBytes: 0,
     peakHeapBytes: 0,
     elapsedSeconds: 0,
