@@ -5,7 +5,7 @@
  * reproduces the engine, not the engine itself.
  */
 import AxeBuilder from "@axe-core/playwright";
-import { copyFileSync, mkdirSync } from "fs";
+import { mkdirSync } from "fs";
 import { join } from "path";
 import type { Page } from "playwright-core";
 import { fitModel, forecastModel, modelStates, predictionInterval } from "../../src/engine";
@@ -232,9 +232,7 @@ describeWithChromium("preview workbook in Chromium", () => {
     await openPreview(page, server!.url);
     await page.click('td[data-cell="I5"]'); // a spilled forecast, its formula in the formula bar
     const workbook = join(ARTIFACTS, "preview-workbook.png");
-    await page.screenshot({ path: workbook });
-    mkdirSync(join(REPO, "assets"), { recursive: true });
-    copyFileSync(workbook, join(REPO, "assets/preview-screenshot.png"));
+    await page.screenshot({ path: workbook }); // tests write only here; `npm run picture` refreshes the README's
     await writeSeedTraysLedger(page);
     await page.screenshot({ path: join(ARTIFACTS, "preview-ledger.png"), fullPage: true });
   });
