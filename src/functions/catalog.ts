@@ -88,14 +88,17 @@ const typedWhole = (a: ArgShape): number | undefined =>
   a.literal !== undefined && Number.isInteger(a.literal) && a.literal >= 1 ? a.literal : undefined;
 
 /**
- * Rows needed for p seasonal indices: the typed p; when p is detected, at most a third of the
- * history (a season must repeat three times to be found); when p comes from a cell, at most
- * half of it (two full seasons are needed).
+ * Rows needed for p seasonal indices, checked against the history before anything is
+ * reserved: when p is detected, at most a third of the history (a season must repeat three
+ * times to be found); otherwise at most half of it (two full seasons are needed), so a typed
+ * period longer than that reserves one cell for its message instead of a block of p rows.
  */
 function indexRows(history: ArgShape, period: ArgShape): number {
   const n = seriesLength(history);
   if (period.omitted || period.literal === 0) return Math.max(1, Math.floor(n / 3));
-  return typedWhole(period) ?? Math.max(1, Math.floor(n / 2));
+  const mostIndices = Math.max(1, Math.floor(n / 2));
+  const typed = typedWhole(period);
+  return typed !== undefined && typed <= mostIndices ? typed : typed !== undefined ? 1 : mostIndices;
 }
 
 function horizonRows(horizon: ArgShape): number | undefined {

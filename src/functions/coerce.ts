@@ -21,9 +21,9 @@ export interface SeriesInput {
 
 /** A range argument as a rectangle of cells (a single value counts as one cell). */
 export function readRange(value: unknown, name: string): unknown[][] {
-  if (value === undefined || value === null) {
-    throw badInput("missing-range", `The ${name} range is missing. Select the cells that hold it.`);
-  }
+  if (value === undefined) throw badInput("missing-range", `The ${name} range is missing. Select the cells that hold it.`);
+  // A one-cell range over a blank cell arrives as a blank value: the first state of a rolling table.
+  if (value === null) return [[null]];
   if (!Array.isArray(value)) return [[value]];
   if (value.length === 0) throw badInput("missing-range", `The ${name} range is empty. Select the cells that hold it.`);
   const rows = value.map((row) => (Array.isArray(row) ? row : [row]));
@@ -39,18 +39,27 @@ export function readRange(value: unknown, name: string): unknown[][] {
  * A series whose cells cannot be read comes back as the EbbError that says why, so the
  * other series of a block still compute.
  */
-export function readSeries(value: unknown, name: string): (SeriesInput | EbbError)[] {
+export function readSeries(value: unknown, name: string, blanksAllowed = false): (SeriesInput | EbbError)[] {
   const range = readRange(value, name);
   const rows = range.length;
   const cols = range[0].length;
-  if (rows === 1 && cols > 1) return [seriesOf(range[0], name, (i) => `cell ${i + 1} of ${name}`)];
+  const read = (cells: unknown[], label: string): SeriesInput | EbbError => {
+    const s = seriesOf(cells, label, (i) => `cell ${i + 1} of ${label}`);
+    return blanksAllowed || s instanceof EbbError || s.values.some((v) => v !== null) ? s : noValuesYet(label);
+  };
+  if (rows === 1 && cols > 1) return [read(range[0], name)];
   const out: (SeriesInput | EbbError)[] = [];
-  for (let c = 0; c < cols; c++) {
-    const cells = range.map((row) => row[c]);
-    const label = cols > 1 ? `column ${c + 1} of ${name}` : name;
-    out.push(seriesOf(cells, label, (i) => `cell ${i + 1} of ${label}`));
-  }
+  for (let c = 0; c < cols; c++) out.push(read(range.map((row) => row[c]), cols > 1 ? `column ${c + 1} of ${name}` : name));
   return out;
+}
+
+/**
+ * A range with no numbers yet is #N/A, not a mistake: a rolling table's formulas are typed
+ * before the first actual arrives, and #N/A is what a planner's own lookups show for "not yet".
+ */
+function noValuesYet(label: string): EbbError {
+  const what = /forecast/.test(label) ? "the forecasts" : "some actuals";
+  return new EbbError("na", "no-values-yet", `The ${label} range has no values yet. Type ${what}, oldest first.`);
 }
 
 /** The one series of a range that must hold exactly one (a column or a row). */

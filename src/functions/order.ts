@@ -19,7 +19,7 @@ export function correctedFn(history: unknown, corrections: unknown): Block {
       `The corrections range is ${c.length} x ${c[0].length} cells and the history ${h.length} x ${h[0].length}. Select corrections of the same size as the history, row for row and column for column.`,
     );
   }
-  const fixes = readSeries(c, "corrections");
+  const fixes = readSeries(c, "corrections", true);
   const rows = h.length === 1 && h[0].length > 1;
   const block = eachSeries(readSeries(h, "history"), 1, (s, i) => {
     const fix = fixes[i];

@@ -30,6 +30,7 @@ function scalarIn(v: unknown): unknown {
 
 /** One argument as a host hands it over: a rectangle of cells for a range, else a single value. */
 export function argumentIn(v: unknown): unknown {
+  if (v === undefined) return undefined; // left out, unlike a blank cell
   if (v instanceof SimpleRangeValue) return v.data.map((row) => row.map(scalarIn));
   return scalarIn(v);
 }
