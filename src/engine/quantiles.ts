@@ -13,6 +13,8 @@ export function quantilePair(v: Float64Array, q: number): [number, number] {
       return [sortedQuantile(v, q), sortedQuantile(v, 1 - q)];
     }
   }
+  const fast = bracketed(v, q);
+  if (fast) return fast;
   const at = (k: number, from: number): [number, number] => {
     select(v, k, from, n - 1);
     let next = Infinity;
@@ -30,6 +32,57 @@ export function quantilePair(v: Float64Array, q: number): [number, number] {
   // Everything after the low order statistic is at least as large: the high one is found there.
   const highValue = interpolate(posHigh, Math.floor(posLow) + 1 <= Math.floor(posHigh) ? Math.floor(posLow) + 1 : 0);
   return [lowValue, highValue];
+}
+
+const SAMPLE = 128;
+const MARGIN = 4;
+const kept1 = new Float64Array(4096);
+const kept2 = new Float64Array(4096);
+
+/**
+ * The same order statistics in one pass (after Floyd & Rivest 1975, CACM 18(3)): a fixed
+ * sample of the values, sorted, brackets each wanted rank; one pass counts the values below
+ * each bracket and keeps those inside it; the few kept are sorted. Undefined when a rank falls
+ * outside its bracket (the caller then selects).
+ */
+function bracketed(v: Float64Array, q: number): [number, number] | undefined {
+  const n = v.length;
+  if (n < 4 * SAMPLE) return undefined;
+  const sample = new Float64Array(SAMPLE);
+  const stride = Math.floor(n / SAMPLE);
+  for (let i = 0; i < SAMPLE; i++) sample[i] = v[i * stride];
+  sample.sort();
+  const posLow = (n - 1) * q;
+  const posHigh = (n - 1) * (1 - q);
+  const bracket = (pos: number): [number, number] => {
+    const r = Math.floor((pos / (n - 1)) * (SAMPLE - 1));
+    return [r - MARGIN < 0 ? -Infinity : sample[r - MARGIN], r + 1 + MARGIN >= SAMPLE ? Infinity : sample[r + 1 + MARGIN]];
+  };
+  const [lo1, hi1] = bracket(posLow);
+  const [lo2, hi2] = bracket(posHigh);
+  let below1 = 0;
+  let below2 = 0;
+  let count1 = 0;
+  let count2 = 0;
+  const room = kept1.length;
+  for (let i = 0; i < n; i++) {
+    const x = v[i];
+    if (x < lo1) below1++;
+    else if (x <= hi1 && count1 < room) kept1[count1++] = x;
+    if (x < lo2) below2++;
+    else if (x <= hi2 && count2 < room) kept2[count2++] = x;
+  }
+  if (count1 === room || count2 === room) return undefined;
+  const pick = (pos: number, below: number, kept: Float64Array, count: number): number | undefined => {
+    const k = Math.floor(pos) - below;
+    const k2 = Math.min(Math.floor(pos) + 1, n - 1) - below;
+    if (k < 0 || k2 >= count) return undefined;
+    const inside = kept.subarray(0, count).sort();
+    return inside[k] + (pos - Math.floor(pos)) * (inside[k2] - inside[k]);
+  };
+  const low = pick(posLow, below1, kept1, count1);
+  const high = pick(posHigh, below2, kept2, count2);
+  return low === undefined || high === undefined ? undefined : [low, high];
 }
 
 function sortedQuantile(sorted: Float64Array, q: number): number {
