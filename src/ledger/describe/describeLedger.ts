@@ -1,9 +1,9 @@
 import { checkSheetName, parseCell, rangeAddress, sheetReference, absolute } from "./addresses";
 import { chartSpec } from "./chartSection";
 import type { SectionContext } from "./context";
-import { engineFigures } from "./engineFigures";
+import { engineFigures, shownCycles } from "./engineFigures";
 import { SUBTITLE, title } from "./labels";
-import { ledgerGeometry, type Shape } from "./layout";
+import { ledgerGeometry, updateRowCount } from "./layout";
 import { checkTag, defaultTag, ledgerName } from "./names";
 import { outlookSection } from "./outlookSection";
 import { scorecardSection } from "./scorecardSection";
@@ -24,17 +24,7 @@ export function describeLedger(input: LedgerInput): LedgerDescription {
   const tag = checkTag(input.tag ?? defaultTag(sheet, input.anchor.cell));
   const f = engineFigures(input.history, input.settings, input.horizon, input.coverage);
   const spec = f.model.spec;
-  const shape: Shape = {
-    seasonal: f.seasonal,
-    mult: f.mult,
-    trend: spec.trend,
-    start: spec.start as Shape["start"],
-    p: f.p,
-    window: f.window,
-    horizon: input.horizon,
-    updateRows: f.p + (f.y.length - f.firstUpdate),
-  };
-  const g = ledgerGeometry(r0, c0, shape);
+  const g = ledgerGeometry(r0, c0, { model: f.model.shape, horizon: input.horizon, updateRows: updateRowCount(f.model.shape, f.y.length) });
   const name = (input.name ?? "").trim() || "History";
   const cells = new SheetCells();
   const ctx: SectionContext = {
@@ -74,7 +64,7 @@ export function describeLedger(input: LedgerInput): LedgerDescription {
       seasonality: spec.seasonality,
       trend: spec.trend,
       start: spec.start as "decomposition" | "classic",
-      cycles: f.seasonal ? f.window / f.p : f.window,
+      cycles: shownCycles(f.model.shape),
       horizon: input.horizon,
       coverage: input.coverage,
     },

@@ -17,6 +17,7 @@ import {
   rmse,
   trackingSignal,
   type FittedModel,
+  type ModelShape,
   type Interval,
   type StateTable,
 } from "../../engine";
@@ -43,6 +44,11 @@ export interface EngineFigures {
   score: { mad: number; rmse: number; mape: number | string; bias: number; count: number };
 }
 
+/** The "Start seasons" setting as the ledger shows it: seasons in the start window (periods without seasons). */
+export function shownCycles(shape: ModelShape): number {
+  return shape.seasonal ? shape.startWindow / shape.period : shape.startWindow;
+}
+
 export const MAPE_UNDEFINED = "not defined (an actual is 0)";
 
 /** Fit (or take) the model and gather the engine's figures. Throws EbbError with advice on bad input. */
@@ -59,7 +65,8 @@ export function engineFigures(history: ArrayLike<number | null | undefined>, set
   const y = cleanHistory(history);
   const model = fitModel(y, {
     period: settings.period,
-    seasonality: parseSeasonality(settings.seasonality),
+    // "none" is what a ledger without seasons records in its settings block.
+    seasonality: settings.seasonality === "none" ? "none" : parseSeasonality(settings.seasonality),
     trend: parseTrend(settings.trend),
     start,
     cycles: settings.cycles,

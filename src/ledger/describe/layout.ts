@@ -1,10 +1,11 @@
-import { badInput } from "../../engine";
+import { badInput, type ModelShape } from "../../engine";
 import { MAX_COLS, MAX_ROWS } from "./addresses";
 import type { SettingKey, StartColumnKey, UpdateColumnKey } from "./types";
 
 /**
  * Where each part of a ledger goes, relative to its top-left cell. A pure function of the
- * model's shape, so verify and extend can rebuild it from the settings block alone.
+ * engine's model shape (src/engine/shape.ts), so verify and extend can rebuild it from the
+ * settings block alone.
  *
  *   title, subtitle
  *   1 Settings (left)            5 Scorecard (right)
@@ -29,18 +30,22 @@ export const SETTING_KEYS: SettingKey[] = [
   "tag",
 ];
 
-export interface Shape {
-  seasonal: boolean;
-  mult: boolean;
-  trend: "linear" | "damped" | "none";
-  start: "decomposition" | "classic";
-  /** Season length (1 without seasonality). */
-  p: number;
-  /** Periods in the start table. */
-  window: number;
+/** What the layout depends on: the engine's model shape, the outlook's length and the table's rows. */
+export interface LayoutShape {
+  model: ModelShape;
   horizon: number;
   /** Rows in the update table, start rows included. */
   updateRows: number;
+}
+
+/** Start rows of the update table: the last season of the start window (one row without seasons). */
+export function startRowCount(model: ModelShape): number {
+  return model.period;
+}
+
+/** Rows of the update table for a history of n periods: the start rows, then one per updated period. */
+export function updateRowCount(model: ModelShape, n: number): number {
+  return startRowCount(model) + (n - model.firstUpdate);
 }
 
 export type OutlookColumnKey = "period" | "steps" | "position" | "multiplier" | "index" | "forecast" | "weight" | "sumSquares" | "half" | "gapBelow" | "gapAbove" | "low" | "high";
@@ -78,7 +83,8 @@ function columns<K extends string>(keys: (K | false)[], c0: number): Partial<Rec
   return out;
 }
 
-export function startColumnKeys(s: Shape): StartColumnKey[] {
+export function startColumnKeys(m: ModelShape): StartColumnKey[] {
+  const s = { seasonal: m.seasonal, start: m.start, trend: m.trend };
   const keys: (StartColumnKey | false)[] = ["period", s.seasonal && "position", "actual"];
   if (s.seasonal) {
     keys.push("average", "detrended");
@@ -91,7 +97,9 @@ export function startColumnKeys(s: Shape): StartColumnKey[] {
   return keys.filter((k): k is StartColumnKey => k !== false);
 }
 
-export function ledgerGeometry(r0: number, c0: number, s: Shape): Geometry {
+export function ledgerGeometry(r0: number, c0: number, shape: LayoutShape): Geometry {
+  const m = shape.model;
+  const s = { seasonal: m.seasonal, mult: m.multiplicative, p: m.period, window: m.startWindow, horizon: shape.horizon, updateRows: shape.updateRows };
   const updateKeys: (UpdateColumnKey | false)[] = [
     "period",
     s.seasonal && "position",
@@ -136,7 +144,7 @@ export function ledgerGeometry(r0: number, c0: number, s: Shape): Geometry {
   const outlookLast = outlookHeader + s.horizon;
 
   const startHeading = outlookLast + 2;
-  const startKeys = startColumnKeys(s);
+  const startKeys = startColumnKeys(m);
   const startCols = columns(startKeys, c0);
   const sideCol = c0 + startKeys.length + 1;
   const startFirst = startHeading + 2;
@@ -168,7 +176,7 @@ export function ledgerGeometry(r0: number, c0: number, s: Shape): Geometry {
       cols: columns(outlookKeys, c0),
     },
     start: { heading: startHeading, header: startHeading + 1, first: startFirst, cols: startCols, sideCol, indexHeader, indexFirst, lineFirst },
-    updates: { heading: updatesHeading, header: updatesHeader, first: updatesFirst, firstUpdate: updatesFirst + s.p, cols: updateCols, reachLast },
+    updates: { heading: updatesHeading, header: updatesHeader, first: updatesFirst, firstUpdate: updatesFirst + startRowCount(m), cols: updateCols, reachLast },
     chart: { row: settingsHeading, col: c0 + width + 1, lastRow: settingsHeading + 20, lastCol: c0 + width + 11 },
   };
 }

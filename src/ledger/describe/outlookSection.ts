@@ -1,7 +1,7 @@
 import { cellAddress } from "./addresses";
 import { abs, nm, type SectionContext } from "./context";
 import { OUTLOOK_BASIS, OUTLOOK_COLUMNS, SECTION } from "./labels";
-import type { OutlookColumnKey } from "./layout";
+import { updateRowCount, type OutlookColumnKey } from "./layout";
 import { FORMAT } from "./sheet";
 import type { OutlookRowCells } from "./types";
 import { additiveIntervalWeights, estimatedQuantities, trendMultipliers, varianceDivisor } from "../../engine";
@@ -26,7 +26,7 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
 
   // Basis: the last row's period, level and trend; the error variance and z.
   const basis: [keyof typeof OUTLOOK_BASIS, string, number, string][] = [
-    ["rows", `=COUNT(${nm(ctx, "periods")})`, p + (n - f.firstUpdate), FORMAT.count],
+    ["rows", `=COUNT(${nm(ctx, "periods")})`, updateRowCount(model.shape, n), FORMAT.count],
   ];
   const rowsCell = abs(o.basisValueRow, c0 + 3);
   basis.unshift(

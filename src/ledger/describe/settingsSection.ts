@@ -2,6 +2,7 @@ import { cellAddress, sheetReference } from "./addresses";
 import { abs, nm, type SectionContext } from "./context";
 import { SECTION, SETTING_ROWS, SETTINGS_HEADER, SETTINGS_NOTES, UNUSED } from "./labels";
 import { SETTING_KEYS } from "./layout";
+import { shownCycles } from "./engineFigures";
 import { FORMAT } from "./sheet";
 import type { CellKind, CellValue, SettingKey, StyleRole } from "./types";
 
@@ -29,7 +30,7 @@ export function settingsSection(ctx: SectionContext): { inUse: Record<SettingKey
     seasonality: { value: spec.seasonality, kind: "fixed-setting" },
     trend: { value: spec.trend, kind: "fixed-setting" },
     start: { value: spec.start, kind: "fixed-setting" },
-    cycles: { value: f.seasonal ? f.window / f.p : f.window, kind: "fixed-setting", format: FORMAT.count },
+    cycles: { value: shownCycles(f.model.shape), kind: "fixed-setting", format: FORMAT.count },
     horizon: { value: ctx.horizon, kind: "fixed-setting", format: FORMAT.count },
     coverage: { value: ctx.coverage, kind: "setting", format: FORMAT.coverage },
     tag: { value: `ebb_${ctx.tag}_`, kind: "fixed-setting" },

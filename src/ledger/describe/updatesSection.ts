@@ -1,6 +1,7 @@
 import { cellAddress, rangeAddress, sheetReference } from "./addresses";
 import { abs, nm, type SectionContext } from "./context";
 import { FLAG_NOTE, SECTION, START_ROW_NOTE, UPDATE_COLUMNS } from "./labels";
+import { startRowCount } from "./layout";
 import { FORMAT } from "./sheet";
 import type { ConditionalFlag, UpdateColumnKey } from "./types";
 import { runningErrorSum } from "../../engine";
@@ -60,17 +61,18 @@ export function updatesSection(ctx: SectionContext): { rows: { period: number; r
   }
 
   const rows: { period: number; row: number; start: boolean }[] = [];
-  // Start rows: periods fu-p .. fu-1.
+  // Start rows: the periods just before the first update.
   const state = f.model.start.state;
-  for (let i = 0; i < p; i++) {
-    const t = fu - p + i;
+  const startRows = startRowCount(f.model.shape);
+  for (let i = 0; i < startRows; i++) {
+    const t = fu - startRows + i;
     const r = rowOf(t);
     rows.push({ period: t + 1, row: r, start: true });
     cells.put(r, cols.period!, "constant", "start", t + 1, { format: FORMAT.period, ...(i === 0 ? { note: START_ROW_NOTE } : {}) });
     if (cols.position !== undefined) cells.put(r, cols.position, "constant", "start", (t % p) + 1, { format: FORMAT.period });
     const src = ctx.refs.startActual[t];
     cells.formula(r, cols.actual!, `=IF(ISNUMBER(${src}),${src},"")`, Number.isNaN(f.y[t]) ? "" : f.y[t], FORMAT.actual, "linked");
-    if (i === p - 1) {
+    if (i === startRows - 1) {
       cells.formula(r, cols.level!, `=${ctx.refs.startLevel}`, state.level, FORMAT.units, "linked");
       if (hasTrend) cells.formula(r, cols.trend!, `=${ctx.refs.startTrend}`, state.trend, FORMAT.trend, "linked");
       else cells.put(r, cols.trend!, "constant", "start", 0, { format: FORMAT.trend });

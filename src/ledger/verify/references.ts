@@ -51,53 +51,56 @@ export function spanHas(s: Span, row: number, col: number): boolean {
   return row >= s.r1 && row <= s.r2 && col >= s.c1 && col <= s.c2;
 }
 
-/** Every described cell that reads, directly or through other cells, one of the `sources`. */
+/**
+ * Every described cell that reads, directly or through other cells, one of the `sources`.
+ * Single-cell references are looked up by cell; ranges are kept per column, grouped by their
+ * first row with the last rows in order, so each range is visited once when it is reached:
+ * the running sums of a long table (ranges from the first update row down to each row) cost
+ * a few passes instead of one entry per cell they cover.
+ */
 export function downstreamOf(cells: LedgerCell[], names: Map<string, Span>, sources: Set<CellKey>): Set<CellKey> {
-  const byColumn = new Map<number, LedgerCell[]>();
-  for (const c of cells) {
-    const list = byColumn.get(c.col) ?? [];
-    list.push(c);
-    byColumn.set(c.col, list);
-  }
-  for (const list of byColumn.values()) list.sort((a, b) => a.row - b.row);
-  const readers = new Map<CellKey, CellKey[]>();
+  const single = new Map<CellKey, CellKey[]>();
+  const ranges = new Map<number, Map<number, { r2: number; reader: CellKey }[]>>();
   for (const cell of cells) {
     if (cell.formula === undefined) continue;
     const me = key(cell.row, cell.col);
     for (const s of formulaSpans(cell.formula, names)) {
+      if (s.r1 === s.r2 && s.c1 === s.c2) {
+        const k = key(s.r1, s.c1);
+        const list = single.get(k);
+        if (list) list.push(me);
+        else single.set(k, [me]);
+        continue;
+      }
       for (let col = s.c1; col <= s.c2; col++) {
-        const list = byColumn.get(col);
-        if (!list) continue;
-        for (let i = lowerBound(list, s.r1); i < list.length && list[i].row <= s.r2; i++) {
-          const k = key(list[i].row, col);
-          const r = readers.get(k) ?? [];
-          r.push(me);
-          readers.set(k, r);
-        }
+        let groups = ranges.get(col);
+        if (!groups) ranges.set(col, (groups = new Map()));
+        const group = groups.get(s.r1);
+        if (group) group.push({ r2: s.r2, reader: me });
+        else groups.set(s.r1, [{ r2: s.r2, reader: me }]);
       }
     }
   }
+  for (const groups of ranges.values()) for (const g of groups.values()) g.sort((a, b) => a.r2 - b.r2);
   const out = new Set<CellKey>();
   const queue = [...sources];
+  const reach = (reader: CellKey) => {
+    if (!out.has(reader)) {
+      out.add(reader);
+      queue.push(reader);
+    }
+  };
   while (queue.length > 0) {
     const k = queue.pop()!;
-    for (const r of readers.get(k) ?? []) {
-      if (!out.has(r)) {
-        out.add(r);
-        queue.push(r);
-      }
+    for (const r of single.get(k) ?? []) reach(r);
+    const [row, col] = k.split(",").map(Number);
+    const groups = ranges.get(col);
+    if (!groups) continue;
+    for (const [r1, group] of groups) {
+      if (r1 > row) continue;
+      // Every range of this group that ends at or below the row holds the cell; take them off.
+      while (group.length > 0 && group[group.length - 1].r2 >= row) reach(group.pop()!.reader);
     }
   }
   return out;
-}
-
-function lowerBound(list: LedgerCell[], row: number): number {
-  let lo = 0;
-  let hi = list.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if (list[mid].row < row) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
 }
