@@ -4,10 +4,11 @@
  * destination), with calculation and screen updating suspended, and refuses (asks) when the
  * destination holds anything. Expected values: the description the adapter was given.
  */
-import { describeLedger, type LedgerDescription } from "../../src/ledger";
-import { writeLedgerToExcel, type HostWriteResult } from "../../src/ledger/adapters/excelHost";
+import { describeLedger, extendLedger, type LedgerDescription } from "../../src/ledger";
+import { writeExtensionToExcel, writeLedgerToExcel, type HostWriteResult } from "../../src/ledger/adapters/excelHost";
 import { parseCell } from "../../src/ledger/describe/addresses";
-import { quarterlyMargin } from "./support/cases";
+import { longSeries, quarterlyMargin } from "./support/cases";
+import { hyperFormulaReader, ledgerInHyperFormula } from "./support/hf";
 import { fakeExcel, type FakeExcel } from "./support/fakeExcel";
 
 function ledger(): LedgerDescription {
@@ -107,5 +108,51 @@ describe("Excel host adapter", () => {
     const clearAt = fake.calls.findIndex((c) => c.what === "clear");
     const formulasAt = fake.calls.findIndex((c) => c.what === "range.formulas");
     expect(clearAt).toBeLessThan(formulasAt);
+  });
+});
+
+describe("Excel host adapter at any length", () => {
+  it("writes a 10,000-period ledger in batches that each send under 2 MB, every cell in its place", async () => {
+    const desc = describeLedger({ history: longSeries(10_000), name: "Long", settings: { period: 12, seasonality: "multiplicative", trend: "linear", alpha: 0.2, beta: 0.01, gamma: 0.1 }, horizon: 12, coverage: 0.9, anchor: { sheet: "Long", cell: "A1" } });
+    const fake = fakeExcel({ sheetExists: false });
+    const progress: number[] = [];
+    const result = await run(fake, desc, { notes: "notes", onProgress: (done, total) => progress.push(done / total) });
+    expect(result.status).toBe("written");
+    const sizes = fake.requestSizes();
+    const total = sizes.reduce((a, b) => a + b, 0);
+    console.log(`10,000-period ledger: ${desc.cells.length} cells sent in ${sizes.length} requests, largest ${(Math.max(...sizes) / 1e6).toFixed(2)} MB, all ${(total / 1e6).toFixed(2)} MB`);
+    // The web host refuses a request over 5 MB; each stays under 2 MB (measured as the JSON of what was sent).
+    expect(Math.max(...sizes)).toBeLessThan(2 * 1024 * 1024);
+    expect(total).toBeGreaterThan(5 * 1024 * 1024);
+    // The progress bar moves: one report per batch, rising.
+    expect(progress.length).toBeGreaterThan(2);
+    expect(progress).toEqual([...progress].sort((a, b) => a - b));
+    // Every formula and constant lands where the description puts it.
+    const written = new Map<string, unknown>();
+    for (const c of fake.calls.filter((x) => x.what === "range.formulas")) {
+      const [address, grid] = c.args as [string, unknown[][]];
+      const top = parseCell(address.split(":")[0]);
+      grid.forEach((line, i) => line.forEach((v, j) => v !== null && written.set(`${top.row + i},${top.col + j}`, v)));
+    }
+    const misplaced = desc.cells.filter((c) => {
+      const v = written.get(`${c.row},${c.col}`);
+      return c.formula ? v !== c.formula : typeof c.value === "number" && v !== c.value;
+    });
+    expect(misplaced.map((c) => c.address)).toEqual([]);
+  });
+
+  it("adds new actuals after one of the ledger's names was deleted: the name is defined again, nothing fails", async () => {
+    const history = quarterlyMargin();
+    const input = { history: history.slice(0, 36), name: "Margin", settings: { period: 4, seasonality: "additive", trend: "linear" }, horizon: 6, coverage: 0.9, anchor: { sheet: "Ebb ledger", cell: "A1" } };
+    const { hf } = ledgerInHyperFormula(input);
+    const ext = extendLedger(hyperFormulaReader(hf, "Ebb ledger"), input.anchor, history.slice(36));
+    const deleted = ext.description.names.find((n) => n.name.endsWith("_errors"))!;
+    const fake = fakeExcel({ sheetExists: true, existingNames: ext.description.names.filter((n) => n !== deleted).map((n) => n.name) });
+    (globalThis as unknown as { Excel: unknown }).Excel = fake.Excel;
+    await expect(writeExtensionToExcel(ext)).resolves.toBeDefined();
+    expect(fake.calls.filter((c) => c.what === "names.add").map((c) => c.args[0])).toEqual([deleted.name]);
+    expect(fake.calls.filter((c) => c.what === "names.delete")).toEqual([]);
+    const appended = fake.calls.filter((c) => c.what === "range.formulas");
+    expect(appended.length).toBeGreaterThan(0);
   });
 });

@@ -7,5 +7,6 @@ export { smape } from "./smape";
 export { mase, maseScale } from "./mase";
 export { bias } from "./bias";
 export { trackingSignal, runningErrorSum } from "./tracking";
+export { runningMad } from "./runningMad";
 export { theilU } from "./theilU";
 export { accuracyTable, type AccuracyRow } from "./table";

@@ -1,5 +1,5 @@
 /// <reference types="office-js" />
-import { cellAddress, parseCell, rangeAddress, sheetReference } from "../describe/addresses";
+import { cellAddress, MAX_COLS, MAX_ROWS, parseCell, rangeAddress, sheetReference } from "../describe/addresses";
 import { FLAG_STYLE, ROLE_STYLES, roleRectangles } from "../describe/styles";
 import type { ChartSpec, LedgerCell, LedgerDescription } from "../describe/types";
 import type { LedgerExtension } from "../extend";
@@ -7,9 +7,10 @@ import { gridReader, type LedgerReader } from "../verify/reader";
 
 /**
  * Write a ledger into the spreadsheet host through the Excel JavaScript API, in one
- * Excel.run: a first sync looks at the destination, and all writes (names, formulas,
- * number formats, styles, merges, notes, conditional formats, chart) go in one batch with
- * calculation and screen updating suspended until that batch's sync.
+ * Excel.run: a first sync looks at the destination, then the writes (names, formulas,
+ * number formats, styles, merges, notes, conditional formats, chart) go in batches of rows,
+ * each request well under the host's request size limit (5 MB on the web; we keep each under
+ * REQUEST_BUDGET), with calculation and screen updating suspended for each batch.
  * It never writes over anything without being told the user agreed: when the destination
  * holds anything it returns "needs-confirmation" with the occupied cells and existing names.
  */
@@ -23,9 +24,15 @@ export interface HostWriteOptions {
   confirmed?: boolean;
   /** How to attach notes; detected from the host's API sets when omitted. */
   notes?: "notes" | "comments" | "none";
+  /** Called after each batch with the rows written so far and the rows in all. */
+  onProgress?: (done: number, total: number) => void;
 }
 
 const MAX_LISTED = 50;
+/** Characters of cell content (formulas and formats) queued before a sync: well under the web host's 5 MB. */
+export const REQUEST_BUDGET = 1_000_000;
+/** Rows read per sync when reading a ledger back (20 columns of formulas and values: about 1.6 MB). */
+export const READ_ROWS = 1000;
 
 export async function writeLedgerToExcel(desc: LedgerDescription, options: HostWriteOptions = {}): Promise<HostWriteResult> {
   return Excel.run(async (context) => {
@@ -80,9 +87,12 @@ export async function writeLedgerToExcel(desc: LedgerDescription, options: HostW
       };
     }
 
-    // One batch of writes.
-    context.application.suspendApiCalculationUntilNextSync();
-    context.application.suspendScreenUpdatingUntilNextSync();
+    // The writes, in batches of rows that each stay under the request budget.
+    const suspend = () => {
+      context.application.suspendApiCalculationUntilNextSync();
+      context.application.suspendScreenUpdatingUntilNextSync();
+    };
+    suspend();
     if (!sheetExists) sheet = workbook.worksheets.add(desc.sheet);
     if (options.confirmed) {
       if (occupiedCount > 0) sheet.getRange(desc.footprint[0]).clear("All");
@@ -90,7 +100,11 @@ export async function writeLedgerToExcel(desc: LedgerDescription, options: HostW
       oldChart?.delete();
     }
     for (const n of desc.names) names.add(n.name, `=${n.refersTo}`, n.comment);
-    writeCellBlock(sheet, desc.cells);
+    const target = sheet;
+    await writeCellBatches(target, desc.cells, async () => {
+      await sync();
+      suspend();
+    }, options.onProgress);
     for (const m of desc.merges) sheet.getRange(m).merge(false);
     for (const [col, width] of Object.entries(desc.columnWidths)) {
       const letters = cellAddress(0, Number(col)).replace(/\d+$/, "");
@@ -111,24 +125,48 @@ export async function writeLedgerToExcel(desc: LedgerDescription, options: HostW
   });
 }
 
-/** Append the rows of an extension (and refresh the engine's numbers and the chart): one look, one batch. */
-export async function writeExtensionToExcel(ext: LedgerExtension): Promise<{ syncs: number }> {
+/**
+ * Append the rows of an extension (and refresh the engine's numbers and the chart): one look,
+ * then batches of rows. A ledger name that was deleted in the workbook is defined again (the
+ * null-object lookup finds it missing instead of failing the whole batch).
+ */
+export async function writeExtensionToExcel(ext: LedgerExtension, onProgress?: (done: number, total: number) => void): Promise<{ syncs: number }> {
   return Excel.run(async (context) => {
+    let syncs = 0;
+    const sync = async () => {
+      syncs++;
+      await context.sync();
+    };
     const sheet = context.workbook.worksheets.getItem(ext.sheet);
     const oldChart = sheet.charts.getItemOrNullObject(ext.chart.name);
     oldChart.load("isNullObject");
-    await context.sync();
-    context.application.suspendApiCalculationUntilNextSync();
-    context.application.suspendScreenUpdatingUntilNextSync();
-    for (const n of ext.names) {
-      context.workbook.names.getItem(n.name).delete();
+    const redefine = new Set(ext.names.map((n) => n.name));
+    const wanted = ext.description.names;
+    const found = wanted.map((n) => {
+      const item = context.workbook.names.getItemOrNullObject(n.name);
+      item.load("isNullObject");
+      return item;
+    });
+    await sync();
+    const suspend = () => {
+      context.application.suspendApiCalculationUntilNextSync();
+      context.application.suspendScreenUpdatingUntilNextSync();
+    };
+    suspend();
+    wanted.forEach((n, i) => {
+      const missing = found[i].isNullObject;
+      if (!missing && !redefine.has(n.name)) return;
+      if (!missing) found[i].delete();
       context.workbook.names.add(n.name, `=${n.refersTo}`, n.comment);
-    }
-    writeCellBlock(sheet, [...ext.append, ...ext.refresh]);
+    });
+    await writeCellBatches(sheet, [...ext.append, ...ext.refresh], async () => {
+      await sync();
+      suspend();
+    }, onProgress);
     if (!oldChart.isNullObject) oldChart.delete();
     addChart(sheet, ext.chart);
-    await context.sync();
-    return { syncs: 2 };
+    await sync();
+    return { syncs };
   });
 }
 
@@ -137,22 +175,79 @@ export async function writeCellsToExcel(sheetName: string, cells: LedgerCell[]):
   await Excel.run(async (context) => {
     const sheet = context.workbook.worksheets.getItem(sheetName);
     context.application.suspendApiCalculationUntilNextSync();
-    writeCellBlock(sheet, cells);
+    await writeCellBatches(sheet, cells, async () => {
+      await context.sync();
+      context.application.suspendApiCalculationUntilNextSync();
+    });
     await context.sync();
   });
 }
 
-/** Read a ledger's area (formulas and values) for verify, extend and fit: one sync. */
-export async function readLedgerFromExcel(sheetName: string, anchorCell: string, rows = 4000, cols = 20): Promise<LedgerReader> {
+/**
+ * Read a ledger's area (formulas and values) for verify, extend and fit. The first sync asks
+ * how far the ledger's columns are used (however long the ledger), then rows are read in
+ * slices of READ_ROWS, one sync each, so no response grows past the host's limit.
+ */
+export async function readLedgerFromExcel(sheetName: string, anchorCell: string, cols = 20): Promise<LedgerReader> {
   return Excel.run(async (context) => {
     const sheet = context.workbook.worksheets.getItem(sheetName);
     const { row, col } = parseCell(anchorCell);
-    const used = sheet.getRange(rangeAddress(row, col, row + rows - 1, col + cols - 1)).getUsedRangeOrNullObject(true);
-    used.load(["isNullObject", "formulas", "values", "rowIndex", "columnIndex"]);
+    const used = sheet.getRange(rangeAddress(row, col, MAX_ROWS - 1, Math.min(MAX_COLS - 1, col + cols - 1))).getUsedRangeOrNullObject(true);
+    used.load(["isNullObject", "rowIndex", "columnIndex", "rowCount", "columnCount"]);
     await context.sync();
     if (used.isNullObject) return gridReader(0, 0, [], []);
-    return gridReader(used.rowIndex, used.columnIndex, used.formulas, used.values);
+    const formulas: unknown[][] = [];
+    const values: unknown[][] = [];
+    for (let r = 0; r < used.rowCount; r += READ_ROWS) {
+      const rows = Math.min(READ_ROWS, used.rowCount - r);
+      const slice = sheet.getRange(rangeAddress(used.rowIndex + r, used.columnIndex, used.rowIndex + r + rows - 1, used.columnIndex + used.columnCount - 1));
+      slice.load(["formulas", "values"]);
+      await context.sync();
+      formulas.push(...slice.formulas);
+      values.push(...slice.values);
+    }
+    return gridReader(used.rowIndex, used.columnIndex, formulas, values);
   });
+}
+
+/** Cells split into bands of whole rows whose formulas and formats stay under the request budget. */
+export function cellBatches(cells: LedgerCell[], budget = REQUEST_BUDGET): LedgerCell[][] {
+  const sorted = [...cells].sort((a, b) => a.row - b.row || a.col - b.col);
+  const batches: LedgerCell[][] = [];
+  let current: LedgerCell[] = [];
+  let size = 0;
+  for (let i = 0; i < sorted.length; ) {
+    let j = i;
+    let rowSize = 0;
+    while (j < sorted.length && sorted[j].row === sorted[i].row) {
+      const c = sorted[j];
+      rowSize += String(c.formula ?? c.value ?? "").length + (c.format?.length ?? 0) + 8;
+      j++;
+    }
+    if (current.length > 0 && size + rowSize > budget) {
+      batches.push(current);
+      current = [];
+      size = 0;
+    }
+    current.push(...sorted.slice(i, j));
+    size += rowSize;
+    i = j;
+  }
+  if (current.length > 0) batches.push(current);
+  return batches;
+}
+
+async function writeCellBatches(sheet: Excel.Worksheet, cells: LedgerCell[], flush: () => Promise<void>, onProgress?: (done: number, total: number) => void): Promise<void> {
+  const batches = cellBatches(cells);
+  let done = 0;
+  for (let i = 0; i < batches.length; i++) {
+    writeCellBlock(sheet, batches[i]);
+    done += batches[i].length;
+    if (i < batches.length - 1) {
+      await flush();
+      onProgress?.(done, cells.length);
+    }
+  }
 }
 
 /** Formulas, values and number formats of all cells as one rectangle (null leaves a cell alone). */

@@ -15,6 +15,7 @@ import {
   parseTrend,
   predictionInterval,
   rmse,
+  runningMad as engineRunningMad,
   trackingSignal,
   type FittedModel,
   type ModelShape,
@@ -83,12 +84,7 @@ export function engineFigures(history: ArrayLike<number | null | undefined>, set
   const actual = y.subarray(firstUpdate);
   const fc = states.forecast.subarray(firstUpdate);
   const tracking = trackingSignal(actual, fc);
-  const runningMad: (number | null)[] = [];
-  let seen = 0;
-  for (let i = 0; i < actual.length; i++) {
-    if (!Number.isNaN(actual[i])) seen++;
-    runningMad.push(seen === 0 ? null : mad(actual.subarray(0, i + 1), fc.subarray(0, i + 1)));
-  }
+  const runningMad = Array.from(engineRunningMad(states.error.subarray(firstUpdate)), (v) => (Number.isNaN(v) ? null : v));
   let mapeValue: number | string;
   try {
     mapeValue = mape(actual, fc);

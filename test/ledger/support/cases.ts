@@ -1,5 +1,5 @@
 import { readFileSync } from "fs";
-import { DEMO_CSV_PATH } from "../../../src/preview/demo/generate-demo";
+import { DEMO_CSV_PATH, mulberry32 } from "../../../src/preview/demo/generate-demo";
 import type { LedgerSettings } from "../../../src/ledger";
 
 /** Test histories: the invented Larkmere demo data (monthly, 2019-2025) and small made-up series. */
@@ -58,4 +58,19 @@ export function ledgerCases(): LedgerCase[] {
   cases.push({ label: "workdays odd period multiplicative classic", history: workdays(), settings: { period: 5, seasonality: "multiplicative", trend: "linear", start: "classic" } });
   cases.push({ label: "workdays odd period additive 3 seasons", history: workdays(), settings: { period: 5, seasonality: "additive", trend: "damped", cycles: 3 } });
   return cases;
+}
+
+/**
+ * A long invented monthly series (n periods, seasonal with growth and noise, a few gaps after
+ * the start window), for ledgers of thousands of rows. Seeded, so every run is the same.
+ */
+export function longSeries(n: number, seed = 7): (number | null)[] {
+  const rand = mulberry32(seed);
+  const out: (number | null)[] = [];
+  for (let t = 0; t < n; t++) {
+    const season = 1 + 0.35 * Math.sin((2 * Math.PI * t) / 12) + 0.1 * Math.cos((4 * Math.PI * t) / 12);
+    out.push(Math.round((400 + 0.05 * t) * season * (0.95 + 0.1 * rand()) * 10) / 10);
+  }
+  for (let k = 1; k <= 3; k++) out[Math.floor((n * k) / 4)] = null;
+  return out;
 }

@@ -20,12 +20,17 @@ export interface FakeExcelOptions {
   existingNames?: string[];
 }
 
+/** Calls that send something to the host: their arguments make up the request of the next sync. */
+const SENDS = /^(range\.|format@|fill@|font@|names\.add|names\.delete|merge|clear|conditionalFormats|charts\.add|chart\.|notes\.add|comments\.add|worksheets\.add)/;
+
 export interface FakeExcel {
   Excel: { run: (cb: (context: unknown) => Promise<unknown>) => Promise<unknown> };
   calls: Call[];
   syncs: () => number;
   /** Properties assigned to ranges, by address: e.g. ranges.get("A1:N120").formulas. */
   ranges: Map<string, Record<string, unknown>>;
+  /** Size in characters (JSON) of what each sync sent: the arguments of the calls made before it. */
+  requestSizes: () => number[];
 }
 
 export function fakeExcel(options: FakeExcelOptions): FakeExcel {
@@ -120,8 +125,18 @@ export function fakeExcel(options: FakeExcelOptions): FakeExcel {
     items: (options.existingNames ?? []).map((name) => ({ name })),
     load: (p: string) => record("names.load", p),
     add: (name: string, reference: string, comment: string) => record("names.add", name, reference, comment),
-    getItem: (name: string) => ({ delete: () => record("names.delete", name) }),
+    getItem: (name: string) => {
+      if (!names.items.some((n) => n.name === name)) throw new Error(`ItemNotFound: the name ${name} does not exist`);
+      return { delete: () => record("names.delete", name) };
+    },
+    getItemOrNullObject: (name: string) => {
+      record("names.getItemOrNullObject", name);
+      const item = new OfficeMockObject({ isNullObject: !names.items.some((n) => n.name === name) });
+      items.push(item);
+      return Object.assign(item, { delete: () => record("names.delete", name) });
+    },
   };
+  const items: OfficeMockObject[] = [];
   const context = {
     workbook: {
       worksheets: {
@@ -146,6 +161,7 @@ export function fakeExcel(options: FakeExcelOptions): FakeExcel {
       await sheetState.sync();
       await used.sync();
       await oldChart.sync();
+      for (const item of items) await item.sync();
       syncs++;
       record("sync");
     },
@@ -156,6 +172,11 @@ export function fakeExcel(options: FakeExcelOptions): FakeExcel {
     calls,
     syncs: () => syncs,
     ranges,
+    requestSizes: () => {
+      const sizes = new Array<number>(syncs).fill(0);
+      for (const c of calls) if (SENDS.test(c.what) && c.afterSyncs < syncs) sizes[c.afterSyncs] += JSON.stringify(c.args).length;
+      return sizes;
+    },
   };
 }
 
