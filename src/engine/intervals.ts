@@ -20,6 +20,11 @@ export function checkCoverage(coverage: number): number {
   return coverage;
 }
 
+/** Standard normal quantile for a two-sided coverage: z with P(|Z| <= z) = coverage (1.959964 for 0.95). */
+export function coverageZ(coverage: number): number {
+  return normalQuantile(0.5 + checkCoverage(coverage) / 2, 0, 1);
+}
+
 /**
  * Prediction intervals for the next `horizon` periods.
  * Additive or no seasonality: the analytic variance of Hyndman, Koehler, Ord & Snyder (2008),
@@ -42,7 +47,7 @@ export function predictionInterval(model: FittedModel, horizon: number, coverage
   if (model.spec.seasonality === "multiplicative") return simulated(model, forecast, coverage);
   const { sumSquares } = additiveIntervalWeights(model, horizon);
   const sigma2 = oneStepVariance(model);
-  const z = normalQuantile(0.5 + coverage / 2, 0, 1);
+  const z = coverageZ(coverage);
   const low = new Float64Array(horizon);
   const high = new Float64Array(horizon);
   for (let h = 1; h <= horizon; h++) {

@@ -70,6 +70,7 @@ export function describeLedger(input: LedgerInput): LedgerDescription {
     },
     constants: { ...f.model.constants },
     history: Array.from(f.y, (v) => (Number.isNaN(v) ? null : v)),
+    dataScale: f.scale,
     name,
     cells: cells.all(),
     names: ctx.names,

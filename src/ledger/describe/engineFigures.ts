@@ -15,13 +15,13 @@ import {
   parseTrend,
   predictionInterval,
   rmse,
-  runningMad as engineRunningMad,
-  trackingSignal,
   type FittedModel,
   type ModelShape,
   type Interval,
   type StateTable,
 } from "../../engine";
+import { dataScale } from "./tolerance";
+import { trackingFigures, type TrackingFigures } from "./trackingColumns";
 import type { LedgerSettings } from "./types";
 
 /** Everything the ledger shows that the engine computes, for one history and its settings. */
@@ -39,9 +39,10 @@ export interface EngineFigures {
   firstUpdate: number;
   /** Periods in the start table (the start window). */
   window: number;
-  /** Per update period (index t - firstUpdate): running MAD (null before the first error) and tracking signal. */
-  runningMad: (number | null)[];
-  tracking: Float64Array;
+  /** The tracking-signal columns' figures, per update period (index t - firstUpdate). */
+  tracking: TrackingFigures;
+  /** Typical size of the actuals, for the check's tolerances. */
+  scale: number;
   score: { mad: number; rmse: number; mape: number | string; bias: number; count: number };
 }
 
@@ -83,8 +84,7 @@ export function engineFigures(history: ArrayLike<number | null | undefined>, set
   const forecast = forecastModel(model, horizon);
   const actual = y.subarray(firstUpdate);
   const fc = states.forecast.subarray(firstUpdate);
-  const tracking = trackingSignal(actual, fc);
-  const runningMad = Array.from(engineRunningMad(states.error.subarray(firstUpdate)), (v) => (Number.isNaN(v) ? null : v));
+  const tracking = trackingFigures(actual, fc, states.error.subarray(firstUpdate));
   let mapeValue: number | string;
   try {
     mapeValue = mape(actual, fc);
@@ -103,8 +103,8 @@ export function engineFigures(history: ArrayLike<number | null | undefined>, set
     forecast,
     firstUpdate,
     window,
-    runningMad,
     tracking,
+    scale: dataScale(y),
     score: { mad: mad(actual, fc), rmse: rmse(actual, fc), mape: mapeValue, bias: bias(actual, fc), count: model.errorCount },
   };
 }

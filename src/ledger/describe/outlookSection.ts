@@ -3,8 +3,9 @@ import { abs, nm, type SectionContext } from "./context";
 import { OUTLOOK_BASIS, OUTLOOK_COLUMNS, SECTION } from "./labels";
 import { updateRowCount, type OutlookColumnKey } from "./layout";
 import { FORMAT } from "./sheet";
+import { RELATIVE_TOLERANCE } from "./tolerance";
 import type { OutlookRowCells } from "./types";
-import { additiveIntervalWeights, estimatedQuantities, trendMultipliers, varianceDivisor } from "../../engine";
+import { additiveIntervalWeights, coverageZ, estimatedQuantities, parseCoverage, trendMultipliers, varianceDivisor } from "../../engine";
 
 /**
  * Section 4: the next `horizon` periods from the last row of the update table, found with
@@ -36,7 +37,8 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
   );
   const sigma2 = model.sse / varianceDivisor(model);
   if (!mult) {
-    const z = (f.interval.high[0] - f.forecast[0]) / Math.sqrt(sigma2);
+    // z from the coverage setting, as the cell's NORM.S.INV computes it (never recovered from the interval).
+    const z = coverageZ(parseCoverage(ctx.coverage));
     const lost = estimatedQuantities(model.shape);
     basis.push(["variance", `=SUMSQ(${nm(ctx, "errors")})/MAX(1,COUNT(${nm(ctx, "errors")})-${lost})`, sigma2, FORMAT.units]);
     // Coverage typed as 95 or as 0.95 is the same interval (the engine's parseCoverage rule).
@@ -45,7 +47,9 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
   }
   basis.forEach(([key, formula, value, format], i) => {
     cells.text(o.basisLabelRow, c0 + i, OUTLOOK_BASIS[key].label, "header", OUTLOOK_BASIS[key].note);
-    cells.formula(o.basisValueRow, c0 + i, formula, value, format, "result");
+    const cell = cells.formula(o.basisValueRow, c0 + i, formula, value, format, "result");
+    // A variance is in squared units: errors off by delta move it by about 2 sigma delta.
+    if (key === "variance") cell.tolerance = 2 * Math.sqrt(sigma2) * RELATIVE_TOLERANCE * f.scale + (RELATIVE_TOLERANCE * f.scale) ** 2;
   });
   const lastPeriod = abs(o.basisValueRow, c0);
   const level = abs(o.basisValueRow, c0 + 1);

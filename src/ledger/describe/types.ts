@@ -94,6 +94,11 @@ export interface LedgerCell {
   role: StyleRole;
   /** Short note shown on the cell (header notes give the formula in words). */
   note?: string;
+  /**
+   * For a formula: the absolute rounding its value may carry beyond 1e-9 of its own size, where
+   * that is not set by its format (percent errors, tracking signals, the error variance).
+   */
+  tolerance?: number;
 }
 
 export interface LedgerName {
@@ -223,6 +228,8 @@ export interface LedgerDescription {
   constants: { alpha: number; beta: number; gamma: number; phi: number };
   /** The cleaned history the ledger was written from (null = missing). */
   history: (number | null)[];
+  /** Typical size of the actuals (mean absolute value): the check's tolerances scale with it. */
+  dataScale: number;
   name: string;
   cells: LedgerCell[];
   names: LedgerName[];

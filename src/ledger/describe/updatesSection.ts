@@ -4,7 +4,8 @@ import { FLAG_NOTE, SECTION, START_ROW_NOTE, UPDATE_COLUMNS } from "./labels";
 import { startRowCount } from "./layout";
 import { FORMAT } from "./sheet";
 import type { ConditionalFlag, UpdateColumnKey } from "./types";
-import { runningErrorSum } from "../../engine";
+import { TRACKING_LIMIT, trackingCells } from "./trackingColumns";
+import { RELATIVE_TOLERANCE } from "./tolerance";
 
 /** Defined names over the update table's columns, reaching below the last row. */
 export const COLUMN_NAMES: Partial<Record<UpdateColumnKey, string>> = {
@@ -80,8 +81,7 @@ export function updatesSection(ctx: SectionContext): { rows: { period: number; r
     if (cols.index !== undefined) cells.formula(r, cols.index, `=${ctx.refs.startIndex[t % p]}`, state.indices[i], mult ? FORMAT.ratio : FORMAT.units, "linked");
   }
 
-  const sums = runningErrorSum(f.states.error.subarray(fu));
-  for (let t = fu; t < n; t++) appendUpdateRow(ctx, t, sums[t - fu], rows);
+  for (let t = fu; t < n; t++) appendUpdateRow(ctx, t, rows);
 
   // Names over the columns, reaching below the table so added rows are included.
   for (const key of Object.keys(COLUMN_NAMES) as UpdateColumnKey[]) {
@@ -90,13 +90,13 @@ export function updatesSection(ctx: SectionContext): { rows: { period: number; r
     ctx.names.push({ name: nm(ctx, COLUMN_NAMES[key]!), refersTo: sheetReference(ctx.sheet, ref), comment: `Ebb ledger column: ${headerNotes[key][0]}` });
   }
   const flags: ConditionalFlag[] = [
-    { range: rangeAddress(u.firstUpdate, cols.tracking!, u.reachLast, cols.tracking!), outside: { low: -4, high: 4 }, note: FLAG_NOTE },
+    { range: rangeAddress(u.firstUpdate, cols.tracking!, u.reachLast, cols.tracking!), outside: { low: -TRACKING_LIMIT, high: TRACKING_LIMIT }, note: FLAG_NOTE },
   ];
   return { rows, flags };
 }
 
 /** One update row for period t (0-based), with its formulas and the engine's values. */
-export function appendUpdateRow(ctx: SectionContext, t: number, errorSum: number, rows: { period: number; row: number; start: boolean }[]): void {
+export function appendUpdateRow(ctx: SectionContext, t: number, rows: { period: number; row: number; start: boolean }[]): void {
   const { g, cells, f } = ctx;
   const u = g.updates;
   const cols = u.cols;
@@ -135,7 +135,9 @@ export function appendUpdateRow(ctx: SectionContext, t: number, errorSum: number
   const E = c("error");
   cells.formula(r, cols.absError!, `=IF(ISNUMBER(${E}),ABS(${E}),"")`, present ? Math.abs(e) : "", FORMAT.units);
   const pct = !present ? "" : y !== 0 ? 100 * Math.abs(e / y) : "actual is 0";
-  cells.formula(r, cols.pctError!, `=IF(ISNUMBER(${E}),IF(${A}<>0,100*ABS(${E}/${A}),"actual is 0"),"")`, pct, FORMAT.percent);
+  const pctCell = cells.formula(r, cols.pctError!, `=IF(ISNUMBER(${E}),IF(${A}<>0,100*ABS(${E}/${A}),"actual is 0"),"")`, pct, FORMAT.percent);
+  // The error carries rounding of the data's size; divided by the actual, so does the percent.
+  if (present && y !== 0) pctCell.tolerance = (100 * RELATIVE_TOLERANCE * f.scale) / Math.abs(y);
 
   const L = c("level");
   const levelUpdate = !f.seasonal
@@ -153,9 +155,5 @@ export function appendUpdateRow(ctx: SectionContext, t: number, errorSum: number
     const indexUpdate = mult ? `${gamma}*(${A}/${L})+(1-${gamma})*${S}` : `${gamma}*(${A}-${L})+(1-${gamma})*${S}`;
     cells.formula(r, cols.index, `=IF(ISNUMBER(${A}),${indexUpdate},${S})`, st.index[t], mult ? FORMAT.ratio : FORMAT.units);
   }
-  const absSpan = `${first("absError")}:${c("absError")}`;
-  cells.formula(r, cols.errorSum!, `=SUM(${first("error")}:${E})`, errorSum, FORMAT.units);
-  const mad = f.runningMad[t - fu];
-  cells.formula(r, cols.mad!, `=IF(COUNT(${absSpan})=0,"",AVERAGE(${absSpan}))`, mad === null ? "" : mad, FORMAT.units);
-  cells.formula(r, cols.tracking!, `=IF(COUNT(${absSpan})=0,0,IF(${c("mad")}>0,${c("errorSum")}/${c("mad")},0))`, f.tracking[t - fu], FORMAT.signal);
+  trackingCells(ctx, r, t);
 }

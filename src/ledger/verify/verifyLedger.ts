@@ -1,11 +1,12 @@
-import { COVERAGE_FORMS, EbbError, parseCoverage } from "../../engine";
+import { checkConstant, COVERAGE_FORMS, EbbError, parseCoverage } from "../../engine";
 import { cellAddress } from "../describe/addresses";
 import { describeLedger } from "../describe/describeLedger";
 import type { LedgerAnchor, LedgerCell, LedgerDescription, SettingKey } from "../describe/types";
-import { normaliseFormula, valuesMatch } from "./compare";
-import { readLedger } from "./readLedger";
+import { normaliseFormula, sameComputed, sameConstant } from "./compare";
+import { LEDGER_WORDS, readLedger } from "./readLedger";
 import type { LedgerReader, ReadCell } from "./reader";
 import { downstreamOf, key, nameSpans } from "./references";
+import { ACTIONS } from "../actions";
 
 export type ProblemKind =
   | "formula-replaced"
@@ -28,10 +29,20 @@ export interface VerifyProblem {
   message: string;
 }
 
+/** Values no formula can redo that differ from the engine now: listed in one line after the problems. */
+export interface VerifyNotice {
+  kind: "simulated-interval";
+  addresses: string[];
+  message: string;
+}
+
 export interface VerifyReport {
+  /** True when nothing was changed (notices aside). */
   ok: boolean;
   sheet: string;
+  /** Tampering and differences, each at its cell, in sheet order. */
   problems: VerifyProblem[];
+  notices: VerifyNotice[];
   /** Cells checked. */
   checked: number;
   /** Formula cells whose value differs only because a cell they read is reported above. */
@@ -57,23 +68,38 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
     ledger = readLedger(read, anchor);
   } catch (e) {
     if (e instanceof EbbError) {
-      return { ok: false, sheet: anchor.sheet, problems: [problemAt(anchor.cell, "setting-invalid", null, null, e.message)], checked: 0, downstream: [] };
+      return { ok: false, sheet: anchor.sheet, problems: [problemAt(anchor.cell, "setting-invalid", null, null, e.message)], notices: [], checked: 0, downstream: [] };
     }
     throw e;
   }
   const { input, inUse, written, settingCells } = ledger;
-  // Settings the user may change: must be numbers in range, else recompute with the written value.
+  // Settings the user may change: numbers the engine accepts, else recompute with the written value.
   for (const k of [...CONSTANTS, "coverage" as const]) {
     const v = inUse[k];
-    const ok = typeof v === "number" && (k === "coverage" ? coverageFraction(v) !== undefined : v >= 0 && v <= 1);
-    if (ok && k === "coverage") input.coverage = coverageFraction(v as number)!;
-    if (!ok) {
+    let complaint: string | undefined;
+    try {
+      if (typeof v !== "number") throw new EbbError("value", "bad-constant", `${k} must be ${k === "coverage" ? COVERAGE_FORMS : "a number from 0 to 1"}; the cell holds ${show(v)}.`);
+      // Coverage typed as 95 or as 0.95 is the same interval (the engine's parseCoverage rule).
+      if (k === "coverage") input.coverage = parseCoverage(v);
+      else checkConstant(k, v);
+    } catch (e) {
+      if (!(e instanceof EbbError)) throw e;
+      complaint = e.message.replace(/ Leave it blank to fit it\.$/, " Type a value in range; every formula below uses this cell.");
+    }
+    if (complaint) {
       const at = settingCells[k];
-      problems.push(
-        problem(at.row, at.col, "setting-invalid", written[k], v, k === "coverage" ? `Coverage must be ${COVERAGE_FORMS}.` : `${k} must be a number from 0 to 1.`),
-      );
+      problems.push(problem(at.row, at.col, "setting-invalid", written[k], v, complaint));
       if (k === "coverage") input.coverage = written.coverage as number;
       else input.settings[k as "alpha" | "beta" | "gamma" | "phi"] = written[k] as number;
+    }
+  }
+  // Option words the layout was built for: one of the words, and the one written.
+  for (const k of ["seasonality", "trend", "start"] as const) {
+    const v = inUse[k];
+    const words: readonly string[] = LEDGER_WORDS[k];
+    if (typeof v !== "string" || !words.includes(v.trim())) {
+      const at = settingCells[k];
+      problems.push(problem(at.row, at.col, "setting-invalid", written[k], v, `${show(v)} is not a ${k} word of a ledger (${words.join(", ")}); the layout was built for ${show(written[k])}. Type that back, or write a new ledger.`));
     }
   }
   let expected: LedgerDescription;
@@ -82,14 +108,15 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
   } catch (e) {
     if (e instanceof EbbError) {
       problems.push(problemAt(anchor.cell, "setting-invalid", null, null, `The ledger cannot be recomputed: ${e.message}`));
-      return { ok: false, sheet: anchor.sheet, problems, checked: 0, downstream: [] };
+      return { ok: false, sheet: anchor.sheet, problems, notices: [], checked: 0, downstream: [] };
     }
     throw e;
   }
-  const scale = dataScale(expected.history);
+  const scale = expected.dataScale;
   const reported = new Set(problems.map((p) => key(p.row, p.col)));
   const names = nameSpans(expected.names);
   const differing: { cell: LedgerCell; found: ReadCell }[] = [];
+  const simulated: string[] = [];
   // The "When written" column is the record verify rebuilds from; nothing to compare it with.
   const writtenCells = new Set(Object.values(expected.layout.written));
   let checked = 0;
@@ -104,44 +131,38 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
     };
     switch (cell.kind) {
       case "formula":
-        if (found.formula === undefined) add("formula-replaced", cell.formula!, `The formula was replaced by a constant; it should be ${cell.formula} (value ${show(cell.value)}).`);
+        if (found.formula === undefined) add("formula-replaced", cell.formula!, `The formula was replaced by ${show(found.value)}; it should be ${cell.formula} (value ${show(cell.value)}).`);
         else if (normaliseFormula(found.formula) !== normaliseFormula(cell.formula!)) add("formula-changed", cell.formula!, `The formula was changed; Ebb wrote ${cell.formula}.`);
-        else if (!valuesMatch(found.value, cell.value, scale)) differing.push({ cell, found });
+        else if (!sameComputed(found.value, cell, scale)) differing.push({ cell, found });
         break;
       case "actual":
-        if (found.formula !== undefined || !valuesMatch(found.value, cell.value, scale)) {
-          add("actual-changed", cell.value, `This actual differs from the one the ledger was written from (${show(cell.value)}). Correct it, or write a new ledger from the corrected history.`);
+        if (found.formula !== undefined || !sameConstant(found.value, cell.value)) {
+          add("actual-changed", cell.value, `This actual is now ${show(found.formula ?? found.value)}; the ledger was written from ${show(cell.value)}. Type that back, or write a new ledger from the corrected history.`);
         }
         break;
       case "setting":
         break;
       case "fixed-setting":
-        if (!valuesMatch(found.value, cell.value, scale)) add("setting-changed", cell.value, `The ledger's layout was built for ${show(cell.value)}; to change this setting, write a new ledger.`);
+        if (!sameConstant(found.value, cell.value)) add("setting-changed", cell.value, `Now ${show(found.value)}; the ledger's layout was built for ${show(cell.value)}. Type that back, or write a new ledger to change this setting.`);
         break;
       case "engine":
-        if (found.formula !== undefined || !valuesMatch(found.value, cell.value, scale)) {
-          add("value-differs", cell.value, `The engine now gives ${show(cell.value)} here (its seeded simulation at the settings in use). Fit or refresh the ledger to update it.`);
-        }
+        // No formula can redo these; a difference after a setting changed is a notice, not tampering.
+        if (found.formula !== undefined) add("formula-changed", cell.value, `Ebb wrote the engine's number ${show(cell.value)} here, not a formula.`);
+        else if (typeof found.value !== "number") add("text-changed", cell.value, `Ebb wrote the engine's number ${show(cell.value)} here.`);
+        else if (!sameComputed(found.value, cell, scale)) simulated.push(cell.address);
         break;
       default:
-        if (found.formula !== undefined || !valuesMatch(found.value, cell.value, scale)) add("text-changed", cell.value, `Ebb wrote ${show(cell.value)} here.`);
+        if (found.formula !== undefined || !sameConstant(found.value, cell.value)) add("text-changed", cell.value, `Ebb wrote ${show(cell.value)} here.`);
     }
-  }
-  // A differing formula is reported only when nothing upstream of it is already reported.
-  const tainted = downstreamOf(expected.cells, names, reported);
-  const downstream: string[] = [];
-  for (const { cell, found } of differing) {
-    if (tainted.has(key(cell.row, cell.col))) downstream.push(cell.address);
-    else problems.push(problem(cell.row, cell.col, "value-differs", cell.value, found.value, `The value differs from the engine's ${show(cell.value)} although the cells it reads are right. Recalculate the workbook, or write the ledger again.`));
   }
   // Anything typed below the update table, where the table's names reach.
   const u = expected.layout.updates;
   const lastRow = u.rows[u.rows.length - 1].row;
-  for (let r = lastRow + 1; r <= Math.min(u.lastReachRow, lastRow + 200); r++) {
+  for (let r = lastRow + 1; r <= u.lastReachRow; r++) {
     for (const c of Object.values(u.columns)) {
       const found = read(r, c!);
       if (found.formula !== undefined || (found.value !== null && found.value !== "")) {
-        problems.push(problem(r, c!, "unexpected-content", null, found.formula ?? found.value, "This cell lies inside the update table's reach and is read by the outlook and scorecard. Clear it, or add periods with Extend."));
+        problems.push(problem(r, c!, "unexpected-content", null, found.formula ?? found.value, `This cell lies inside the update table's reach and is read by the outlook and scorecard. Clear it, or add periods with "${ACTIONS.extend}".`));
         reported.add(key(r, c!));
       }
     }
@@ -165,8 +186,24 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
       }
     }
   }
+  // A differing formula is reported only when nothing upstream of it is already reported.
+  const tainted = differing.length > 0 ? downstreamOf(expected.cells, names, reported) : new Set<string>();
+  const downstream: string[] = [];
+  for (const { cell, found } of differing) {
+    if (tainted.has(key(cell.row, cell.col))) downstream.push(cell.address);
+    else problems.push(problem(cell.row, cell.col, "value-differs", cell.value, found.value, `The value ${show(found.value)} differs from the engine's ${show(cell.value)} although the cells it reads are right. Recalculate the workbook, or write the ledger again.`));
+  }
   problems.sort((a, b) => a.row - b.row || a.col - b.col);
-  return { ok: problems.length === 0, sheet: anchor.sheet, problems, checked, downstream, expected };
+  const notices: VerifyNotice[] = simulated.length
+    ? [
+        {
+          kind: "simulated-interval",
+          addresses: simulated,
+          message: `${simulated.length} simulated interval number${simulated.length > 1 ? "s" : ""} (${simulated.slice(0, 3).join(", ")}${simulated.length > 3 ? ", ..." : ""}) no longer match the engine's simulation at the settings in use; no formula can redo them. Press "${ACTIONS.refreshInterval}" to update them.`,
+        },
+      ]
+    : [];
+  return { ok: problems.length === 0, sheet: anchor.sheet, problems, notices, checked, downstream, expected };
 }
 
 function problem(row: number, col: number, kind: ProblemKind, expected: string | number | null, found: string | number | null, message: string): VerifyProblem {
@@ -183,21 +220,4 @@ function problemAt(address: string, kind: ProblemKind, expected: string | number
 function show(v: string | number | null): string {
   if (v === null || v === "") return "blank";
   return typeof v === "number" ? String(Number(v.toPrecision(12))) : `"${v}"`;
-}
-
-/** Typical size of the data: the floor of the numeric tolerance scales with it. */
-function dataScale(history: (number | null)[]): number {
-  let s = 0;
-  let c = 0;
-  for (const v of history) if (v !== null) { s += Math.abs(v); c++; }
-  return c > 0 ? s / c : 1;
-}
-
-/** The coverage cell as a fraction (typed as 95 or 0.95), or undefined when it is neither. */
-function coverageFraction(v: number): number | undefined {
-  try {
-    return parseCoverage(v);
-  } catch {
-    return undefined;
-  }
 }
