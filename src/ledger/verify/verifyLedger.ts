@@ -117,6 +117,7 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
   const names = nameSpans(expected.names);
   const differing: { cell: LedgerCell; found: ReadCell }[] = [];
   const simulated: string[] = [];
+  const simulatedKeys = new Set<string>();
   // The "When written" column is the record verify rebuilds from; nothing to compare it with.
   const writtenCells = new Set(Object.values(expected.layout.written));
   let checked = 0;
@@ -149,7 +150,10 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
         // No formula can redo these; a difference after a setting changed is a notice, not tampering.
         if (found.formula !== undefined) add("formula-changed", cell.value, `Ebb wrote the engine's number ${show(cell.value)} here, not a formula.`);
         else if (typeof found.value !== "number") add("text-changed", cell.value, `Ebb wrote the engine's number ${show(cell.value)} here.`);
-        else if (!sameComputed(found.value, cell, scale)) simulated.push(cell.address);
+        else if (!sameComputed(found.value, cell, scale)) {
+          simulated.push(cell.address);
+          simulatedKeys.add(k);
+        }
         break;
       default:
         if (found.formula !== undefined || !sameConstant(found.value, cell.value)) add("text-changed", cell.value, `Ebb wrote ${show(cell.value)} here.`);
@@ -187,7 +191,7 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
     }
   }
   // A differing formula is reported only when nothing upstream of it is already reported.
-  const tainted = differing.length > 0 ? downstreamOf(expected.cells, names, reported) : new Set<string>();
+  const tainted = differing.length > 0 ? downstreamOf(expected.cells, names, new Set([...reported, ...simulatedKeys])) : new Set<string>();
   const downstream: string[] = [];
   for (const { cell, found } of differing) {
     if (tainted.has(key(cell.row, cell.col))) downstream.push(cell.address);
