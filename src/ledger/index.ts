@@ -6,11 +6,12 @@
  */
 export { describeLedger } from "./describe/describeLedger";
 export type * from "./describe/types";
-export { defaultTag } from "./describe/names";
+export { defaultTag, uniqueTag } from "./describe/names";
+export { ACTIONS } from "./actions";
 export { ROLE_STYLES, FLAG_STYLE } from "./describe/styles";
 export { extendLedger, type LedgerExtension } from "./extend";
 export { fitLedgerConstants, refreshEngineCells, type LedgerFit } from "./fit";
-export { verifyLedger, type VerifyProblem, type VerifyReport, type ProblemKind } from "./verify/verifyLedger";
+export { verifyLedger, type VerifyProblem, type VerifyReport, type VerifyNotice, type ProblemKind } from "./verify/verifyLedger";
 export { readLedger, type ReadLedger } from "./verify/readLedger";
 export { gridReader, type LedgerReader, type ReadCell } from "./verify/reader";
 export { writeLedgerToHyperFormula, writeCellsToHyperFormula, hyperFormulaReader } from "./adapters/hyperformula";

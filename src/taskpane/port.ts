@@ -23,6 +23,9 @@ export interface LedgerLocation {
   tag: string;
 }
 
+/** Called while a long write goes on: cells written so far and in all. */
+export type ProgressReport = (done: number, total: number) => void;
+
 export type WriteOutcome = { status: "written" } | { status: "needs-confirmation"; message: string };
 
 export interface WorkbookPort {
@@ -40,9 +43,9 @@ export interface WorkbookPort {
    * Writes a whole ledger (adding its sheet when missing). Unless `confirmed`, it writes nothing
    * when the destination holds anything, and says what is there instead.
    */
-  writeLedger(ledger: LedgerDescription, confirmed: boolean): Promise<WriteOutcome>;
+  writeLedger(ledger: LedgerDescription, confirmed: boolean, onProgress?: ProgressReport): Promise<WriteOutcome>;
   /** Appends the new rows of an extended ledger (and refreshes its engine numbers and chart). */
-  writeExtension(extension: LedgerExtension): Promise<void>;
+  writeExtension(extension: LedgerExtension, onProgress?: ProgressReport): Promise<void>;
   /** Writes some cells of a ledger (fitted constants, refreshed engine numbers). */
   writeCells(sheet: string, cells: LedgerCell[]): Promise<void>;
   /** Formulas and values of a ledger's area, for reading it back (verify, extend, fit). */

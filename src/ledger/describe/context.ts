@@ -3,7 +3,7 @@ import type { EngineFigures } from "./engineFigures";
 import type { Geometry } from "./layout";
 import { ledgerName } from "./names";
 import type { SheetCells } from "./sheet";
-import type { LedgerName } from "./types";
+import type { HistorySource, LedgerName } from "./types";
 
 /** What every section builder needs: the engine's figures, the geometry and the cell collector. */
 export interface SectionContext {
@@ -16,6 +16,8 @@ export interface SectionContext {
   horizon: number;
   coverage: number;
   names: LedgerName[];
+  /** The history's cells, when the actuals refer to them. */
+  source?: HistorySource;
   /** Cells other sections refer to, filled in as sections are built. */
   refs: {
     startLevel?: string;

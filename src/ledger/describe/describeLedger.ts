@@ -37,6 +37,7 @@ export function describeLedger(input: LedgerInput): LedgerDescription {
     horizon: input.horizon,
     coverage: input.coverage,
     names: [],
+    source: input.source,
     refs: { startIndex: [], startActual: [] },
   };
 
@@ -71,6 +72,7 @@ export function describeLedger(input: LedgerInput): LedgerDescription {
     constants: { ...f.model.constants },
     history: Array.from(f.y, (v) => (Number.isNaN(v) ? null : v)),
     dataScale: f.scale,
+    ...(input.source ? { source: { ...input.source } } : {}),
     name,
     cells: cells.all(),
     names: ctx.names,

@@ -1,3 +1,5 @@
+import { ACTIONS } from "../actions";
+
 /**
  * Every word the ledger shows: section titles, column labels and the notes that give each
  * column's formula in words. Labels are plain English chosen for Ebb (see docs/ledger).
@@ -28,7 +30,7 @@ export const SETTINGS_HEADER = {
 
 export const SETTINGS_NOTES = {
   inUse: "The values every formula below uses (named cells). Alpha, beta, gamma, phi and the coverage may be changed here.",
-  written: "The values when the ledger was written or last fitted. Verify rebuilds the layout from this column; no formula uses it.",
+  written: `The values when the ledger was written or last fitted. "${ACTIONS.verify}" rebuilds the layout from this column; no formula uses it.`,
 };
 
 export interface SettingRowText {
@@ -99,7 +101,7 @@ export const UPDATE_COLUMNS = {
   },
   written: {
     label: "Actual when written",
-    note: "Copy of the actual as it was when the ledger was written or extended. No formula uses it; verify compares the Actual column with it.",
+    note: `Copy of the actual as it was when the ledger was written or extended. No formula uses it; "${ACTIONS.verify}" compares the Actual column with it.`,
   },
 } as const;
 
@@ -198,9 +200,9 @@ export const OUTLOOK_COLUMNS = {
   half: { label: "Half width", note: "z for coverage x square root of (error variance x (1 + sum of squared weights)). Hyndman, Koehler, Ord & Snyder (2008), ch. 6." },
   gapBelow: {
     label: "Gap below",
-    note: "Forecast minus the low end of the engine's seeded simulation of 2000 futures (multiplicative seasonality has no exact formula). A number, not a formula: Fit and Verify refresh it.",
+    note: `Forecast minus the low end of the engine's seeded simulation of 2000 futures (multiplicative seasonality has no exact formula). A number, not a formula: "${ACTIONS.refreshInterval}" and "${ACTIONS.fit}" refresh it; "${ACTIONS.verify}" notes when it is due.`,
   },
-  gapAbove: { label: "Gap above", note: "High end of the engine's seeded simulation minus the forecast. A number, not a formula: Fit and Verify refresh it." },
+  gapAbove: { label: "Gap above", note: `High end of the engine's seeded simulation minus the forecast. A number, not a formula: "${ACTIONS.refreshInterval}" and "${ACTIONS.fit}" refresh it; "${ACTIONS.verify}" notes when it is due.` },
   lowAdd: { label: "Low", note: "Forecast - half width." },
   highAdd: { label: "High", note: "Forecast + half width." },
   lowMult: { label: "Low", note: "Forecast - gap below." },

@@ -2,6 +2,7 @@ import { cellAddress } from "./addresses";
 import { abs, nm, type SectionContext } from "./context";
 import { INDEX_TABLE, LINE_ROWS, SECTION, START_COLUMNS } from "./labels";
 import { FORMAT } from "./sheet";
+import { putActual } from "./sourceCells";
 
 /**
  * Section 2: the start table (period, position, actual, moving average, ratio or difference,
@@ -43,7 +44,7 @@ export function startSection(ctx: SectionContext): void {
     const y = f.y[t];
     cells.put(row(t), cols.period!, "constant", "label", t + 1, { format: FORMAT.period });
     if (cols.position !== undefined) cells.put(row(t), cols.position, "constant", "label", (t % p) + 1, { format: FORMAT.period });
-    cells.put(row(t), cols.actual!, "actual", "actual", Number.isNaN(y) ? null : y, { format: FORMAT.actual });
+    putActual(ctx, row(t), cols.actual!, t);
     cells.put(row(t), cols.written!, "constant", "written", Number.isNaN(y) ? null : y, { format: FORMAT.actual });
     ctx.refs.startActual.push(abs(row(t), cols.actual!));
   }

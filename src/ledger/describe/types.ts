@@ -32,6 +32,13 @@ export interface LedgerAnchor {
   cell: string;
 }
 
+/** Where a history came from: the sheet, its column and the row of period 1 (0-based). */
+export interface HistorySource {
+  sheet: string;
+  col: number;
+  firstRow: number;
+}
+
 export interface LedgerInput {
   /** Actuals oldest first; null (or undefined) for a blank cell. Trailing blanks are dropped. */
   history: ArrayLike<number | null | undefined>;
@@ -46,6 +53,12 @@ export interface LedgerInput {
    * different sheets or in different areas do not clash. Default: from the sheet name and cell.
    */
   tag?: string;
+  /**
+   * The history's cells: the ledger's actuals then refer to them (a corrected history
+   * recomputes the ledger and the check names the cells that changed). Left out, the actuals
+   * are typed in as numbers.
+   */
+  source?: HistorySource;
 }
 
 /** How a cell looks; adapters map roles to fonts and fills (see styles.ts). */
@@ -69,12 +82,14 @@ export type StyleRole =
  * What a cell holds, as far as verify is concerned:
  * - formula: must stay a formula whose value matches the engine;
  * - actual: a typed actual, compared with the copy kept in "Actual when written";
+ * - source: an actual that refers to its history cell: must stay that reference, and its value
+ *   must equal the copy kept in "Actual when written" (else the history changed since);
  * - setting: a setting the user may change (alpha, beta, gamma, phi, coverage);
  * - fixed-setting: a setting the layout was built for (season length, seasonality, ...);
  * - engine: a number the engine produced that no formula can reproduce (simulated gaps);
  * - constant: labels, period numbers, positions, the written record.
  */
-export type CellKind = "formula" | "actual" | "setting" | "fixed-setting" | "engine" | "constant";
+export type CellKind = "formula" | "actual" | "source" | "setting" | "fixed-setting" | "engine" | "constant";
 
 export type CellValue = number | string | null;
 
@@ -99,6 +114,8 @@ export interface LedgerCell {
    * that is not set by its format (percent errors, tracking signals, the error variance).
    */
   tolerance?: number;
+  /** For a source actual: the history cell it refers to, as messages name it (Sales!B50). */
+  source?: string;
 }
 
 export interface LedgerName {
@@ -230,6 +247,8 @@ export interface LedgerDescription {
   history: (number | null)[];
   /** Typical size of the actuals (mean absolute value): the check's tolerances scale with it. */
   dataScale: number;
+  /** The history's cells the actuals refer to (undefined: typed actuals). */
+  source?: HistorySource;
   name: string;
   cells: LedgerCell[];
   names: LedgerName[];

@@ -3,6 +3,7 @@ import { abs, nm, type SectionContext } from "./context";
 import { FLAG_NOTE, SECTION, START_ROW_NOTE, UPDATE_COLUMNS } from "./labels";
 import { startRowCount } from "./layout";
 import { FORMAT } from "./sheet";
+import { putActual } from "./sourceCells";
 import type { ConditionalFlag, UpdateColumnKey } from "./types";
 import { TRACKING_LIMIT, trackingCells } from "./trackingColumns";
 import { RELATIVE_TOLERANCE } from "./tolerance";
@@ -119,7 +120,7 @@ export function appendUpdateRow(ctx: SectionContext, t: number, rows: { period: 
     const src = ctx.refs.startActual[t];
     cells.formula(r, cols.actual!, `=IF(ISNUMBER(${src}),${src},"")`, present ? y : "", FORMAT.actual, "linked");
   } else {
-    cells.put(r, cols.actual!, "actual", "actual", present ? y : null, { format: FORMAT.actual });
+    putActual(ctx, r, cols.actual!, t);
     cells.put(r, cols.written!, "constant", "written", present ? y : null, { format: FORMAT.actual });
   }
   const A = c("actual");

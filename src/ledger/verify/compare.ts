@@ -50,14 +50,17 @@ export function sameComputed(found: CellValue, cell: LedgerCell, dataScale: numb
   return sameConstant(f, e);
 }
 
-/** Formula text compared without the "=", spaces outside quotes, letter case and "_xlfn." prefixes. */
+/**
+ * Formula text compared without the "=", spaces outside quotes, letter case, "_xlfn." prefixes
+ * and the quotes around sheet names (hosts drop them where a name needs none).
+ */
 export function normaliseFormula(formula: string): string {
   const text = formula.trim().replace(/^=/, "");
   let out = "";
   let inString = false;
   for (const ch of text) {
     if (ch === '"') inString = !inString;
-    if (!inString && /\s/.test(ch)) continue;
+    if (!inString && (/\s/.test(ch) || ch === "'")) continue;
     out += inString ? ch : ch.toUpperCase();
   }
   return out.replace(/_XLFN\./g, "").replace(/_XLWS\./g, "");

@@ -1,7 +1,8 @@
 import { badInput, modelShape, type ModelShape, type Seasonality, type TrendKind } from "../../engine";
 import { MAX_ROWS, parseCell } from "../describe/addresses";
 import { ledgerGeometry, SETTING_KEYS, startRowCount, type Geometry } from "../describe/layout";
-import type { LedgerAnchor, LedgerInput, SettingKey } from "../describe/types";
+import { parseSourceFormula } from "../describe/sourceCells";
+import type { HistorySource, LedgerAnchor, LedgerInput, SettingKey } from "../describe/types";
 import type { LedgerReader } from "./reader";
 
 /** A ledger read back: the input that rebuilds it, and where its settings were found. */
@@ -58,6 +59,9 @@ export function readLedger(read: LedgerReader, anchor: LedgerAnchor): ReadLedger
   }
   const shape = modelShape({ period: p, seasonality: seasonality as Seasonality, trend: trend as TrendKind, start, cycles });
   const g = ledgerGeometry(r0, c0, { model: shape, horizon, updateRows: startRowCount(shape) });
+  // The history's cells, from the first start-table actual that still refers to one.
+  let source: HistorySource | undefined;
+  for (let t = 0; t < shape.startWindow && !source; t++) source = parseSourceFormula(read(g.start.first + t, g.start.cols.actual!).formula, t);
   const history: (number | null)[] = [];
   const asNumber = (v: number | string | null) => (typeof v === "number" ? v : null);
   for (let t = 0; t < shape.startWindow; t++) history.push(asNumber(read(g.start.first + t, g.start.cols.written!).value));
@@ -87,6 +91,7 @@ export function readLedger(read: LedgerReader, anchor: LedgerAnchor): ReadLedger
     coverage: typeof inUse.coverage === "number" ? inUse.coverage : NaN,
     anchor: { sheet: anchor.sheet, cell: anchor.cell },
     tag: tagMatch[1],
+    ...(source ? { source } : {}),
   };
   return { input, shape, geometry: g, inUse, written, settingCells, lastRow };
 }

@@ -38,7 +38,8 @@ export function formulaSpans(formula: string, names: Map<string, Span>): Span[] 
     const s = names.get(m[0].toLowerCase());
     if (s) spans.push(s);
   }
-  const withoutNames = text.replace(NAME, "");
+  // References to other sheets (the history cells) are not cells of the ledger.
+  const withoutNames = text.replace(NAME, "").replace(/(?:'(?:[^']|'')+'|[A-Za-z_][A-Za-z0-9_.]*)!\$?[A-Z]{1,3}\$?\d+(?::\$?[A-Z]{1,3}\$?\d+)?/g, "");
   for (const m of withoutNames.matchAll(REF)) {
     const p = parseCell(m[1]);
     const q = m[2] ? parseCell(m[2]) : p;

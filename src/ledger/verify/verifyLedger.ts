@@ -12,6 +12,7 @@ export type ProblemKind =
   | "formula-replaced"
   | "formula-changed"
   | "actual-changed"
+  | "source-changed"
   | "value-differs"
   | "setting-invalid"
   | "setting-changed"
@@ -139,6 +140,15 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
       case "actual":
         if (found.formula !== undefined || !sameConstant(found.value, cell.value)) {
           add("actual-changed", cell.value, `This actual is now ${show(found.formula ?? found.value)}; the ledger was written from ${show(cell.value)}. Type that back, or write a new ledger from the corrected history.`);
+        }
+        break;
+      case "source":
+        if (found.formula === undefined) {
+          add("actual-changed", cell.formula!, `This actual should refer to its history cell ${cell.source} (${cell.formula}); it now holds ${show(found.value)}. Write the reference back, or write a new ledger.`);
+        } else if (normaliseFormula(found.formula) !== normaliseFormula(cell.formula!)) {
+          add("formula-changed", cell.formula!, `This actual should refer to its history cell ${cell.source}; Ebb wrote ${cell.formula}.`);
+        } else if (!sameConstant(found.value, cell.value)) {
+          add("source-changed", cell.value, `The history cell ${cell.source} now holds ${show(found.value)}; the ledger was written from ${show(cell.value)} and now computes with the new figure. If the correction is right, write the ledger again so its record and check follow it.`);
         }
         break;
       case "setting":

@@ -2,7 +2,7 @@ import ExcelJS from "exceljs";
 import { EbbError } from "../../engine";
 import { addLedgerToWorkbook } from "../adapters/xlsx";
 import { describeLedger } from "../describe/describeLedger";
-import { defaultTag } from "../describe/names";
+import { defaultTag, uniqueTag } from "../describe/names";
 import type { LedgerWorkbookSettings } from "../describe/types";
 
 /** A series the workbook holds no ledger for, and why. */
@@ -10,6 +10,9 @@ export interface LeftOut {
   name: string;
   reason: string;
 }
+
+/** The sheet of the .xlsx workbook that holds every series, one column each. */
+export const DATA_SHEET = "Data";
 
 /**
  * The .xlsx workbook of `ebb ledger`: a data sheet with the label column (when given) and every
@@ -27,7 +30,7 @@ export async function writeLedgerWorkbook(
   workbook.calcProperties.fullCalcOnLoad = true;
   const used = new Set<string>(["data"]);
   const usedTags = new Set<string>();
-  const data = workbook.addWorksheet("Data");
+  const data = workbook.addWorksheet(DATA_SHEET);
   const first = labels ? 1 : 0;
   if (labels) {
     data.getCell(1, 1).value = labels.name;
@@ -48,14 +51,14 @@ export async function writeLedgerWorkbook(
   });
   const { horizon, coverage, ...model } = settings;
   const leftOut: LeftOut[] = [];
-  for (const column of columns) {
+  columns.forEach((column, k) => {
     const sheet = uniqueSheetName(`Ledger ${column.name}`, used);
-    let tag = defaultTag(sheet, "A1");
-    for (let k = 2; usedTags.has(tag.toLowerCase()); k++) tag = `${defaultTag(sheet, "A1").slice(0, 10)}${k}`;
-    usedTags.add(tag.toLowerCase());
+    const tag = uniqueTag(defaultTag(sheet, "A1"), usedTags);
+    usedTags.add(tag);
     try {
+      // The actuals refer to the data sheet (row 1 holds the names), so a corrected figure there recomputes the ledger.
       if (column.problem !== undefined) throw new EbbError("value", "bad-cell", column.problem);
-      const desc = describeLedger({ history: column.values, name: column.name, settings: model, horizon, coverage, anchor: { sheet, cell: "A1" }, tag });
+      const desc = describeLedger({ history: column.values, name: column.name, settings: model, horizon, coverage, anchor: { sheet, cell: "A1" }, tag, source: { sheet: DATA_SHEET, col: k + first, firstRow: 1 } });
       addLedgerToWorkbook(workbook, desc);
     } catch (e) {
       if (!(e instanceof EbbError)) throw e;
@@ -65,7 +68,7 @@ export async function writeLedgerWorkbook(
       ws.getCell("A3").value = `This series has no ledger: ${e.message}`;
       leftOut.push({ name: column.name, reason: e.message });
     }
-  }
+  });
   await workbook.xlsx.writeFile(outPath);
   return leftOut;
 }

@@ -68,12 +68,15 @@ export class PreviewPort implements WorkbookPort {
 
   async writeLedger(ledger: LedgerDescription, confirmed: boolean): Promise<WriteOutcome> {
     const used = await this.usedCells(ledger.sheet, ledger.footprint);
-    if (used.length > 0 && !confirmed) {
+    // Names of this tag belong to a ledger already: writing would point them here.
+    const prefix = `ebb_${ledger.tag}_`.toLowerCase();
+    const existingNames = this.workbook.hf.listNamedExpressions().filter((n) => n.toLowerCase().startsWith(prefix));
+    if ((used.length > 0 || existingNames.length > 0) && !confirmed) {
       const shown = used.slice(0, 5).map((c) => a1(c.row, c.col)).join(", ");
-      return {
-        status: "needs-confirmation",
-        message: `${used.length} cell${used.length > 1 ? "s" : ""} of "${ledger.sheet}" in ${ledger.footprint.join(", ")} already hold something (${shown}${used.length > 5 ? ", ..." : ""}). Write the ledger over them?`,
-      };
+      const parts: string[] = [];
+      if (used.length > 0) parts.push(`${used.length} cell${used.length > 1 ? "s" : ""} of "${ledger.sheet}" in ${ledger.footprint.join(", ")} already hold something (${shown}${used.length > 5 ? ", ..." : ""})`);
+      if (existingNames.length > 0) parts.push(`the names ${existingNames.slice(0, 3).join(", ")}${existingNames.length > 3 ? ", ..." : ""} belong to a ledger already`);
+      return { status: "needs-confirmation", message: `${parts.join("; ")}. Write the ledger over them?` };
     }
     if (used.length > 0) {
       // Agreed: clear the area first, as the host adapter does, so nothing old is left inside the ledger.

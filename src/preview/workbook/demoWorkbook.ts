@@ -4,6 +4,7 @@
  * a "Corrections" sheet (corrected history with reasons, suggestions, safety stock), and a
  * "Read me" sheet with the notice and the cautions.
  */
+import { ACTIONS } from "../../ledger/actions";
 import type { RawCellContent } from "hyperformula";
 import { columnLetters } from "./addresses";
 import { parseCsv } from "./csvText";
@@ -155,7 +156,7 @@ function readmeLines(notice: string): string[] {
     "Try it",
     "1. On Sales, type a new month's figure in row 86 under a product (for example 700 in B86): the forecast, ranges and scores recompute.",
     "2. Select one product's column (click its letter), then use the Ebb ledger panel to write a ledger: plain formulas, one row per month.",
-    "3. On the ledger sheet, change alpha in its settings and watch every row recompute; use Verify to check the ledger against Ebb's engine.",
+    `3. On the ledger sheet, change alpha in its settings and watch every row recompute; press "${ACTIONS.verify}" to check the ledger (and the Sales figures it refers to) against Ebb's engine.`,
     "4. On Corrections: hose reels had an (invented) promotion in March 2024 and a stock-out in June 2025. EBB.UNUSUAL flags both and suggests a value; the planner typed a correction and a reason beside each actual. The outlook and safety stock are shown as recorded and with the corrections (EBB.CORRECTED). Clear a correction to see its effect; the actuals on Sales never change.",
     "",
     "Errors: #N/A means more history is needed (the message says how much); #VALUE! means an input must be changed. Hover over an error or select it to read why.",

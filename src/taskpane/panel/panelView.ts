@@ -2,6 +2,7 @@
  * The Ebb ledger panel's page: plain form controls in a fixed order, so everything can be
  * reached with Tab and read by a screen reader. No logic here; mountLedgerPanel wires it.
  */
+import { ACTIONS } from "../../ledger/actions";
 import { CAUTIONS, STOCK_CAUTION } from "./cautions";
 import { el } from "./dom";
 import type { FormValues } from "./readForm";
@@ -118,7 +119,7 @@ export function buildPanelView(): PanelView {
   const areaCell = input("ebb-area-cell", { placeholder: "for example Sheet1!H2", disabled: true });
   const useSelectedCell = el("button", { type: "button", id: "ebb-use-cell", class: "ebb-button small", text: "Use the selected cell", disabled: true });
 
-  const write = el("button", { type: "submit", id: "ebb-write", class: "ebb-button primary", text: "Write ledger" });
+  const write = el("button", { type: "submit", id: "ebb-write", class: "ebb-button primary", text: ACTIONS.write });
   const form = el(
     "form",
     { class: "ebb-form", novalidate: true },
@@ -155,10 +156,10 @@ export function buildPanelView(): PanelView {
 
   const ledgerList = el("select", { id: "ebb-ledger-list" });
   const refreshLedgers = el("button", { type: "button", id: "ebb-refresh", class: "ebb-button small", text: "Look again" });
-  const extend = el("button", { type: "button", id: "ebb-extend", class: "ebb-button", text: "Add new actuals" });
-  const verify = el("button", { type: "button", id: "ebb-verify", class: "ebb-button", text: "Check against the engine" });
-  const fit = el("button", { type: "button", id: "ebb-fit", class: "ebb-button", text: "Fit constants into its settings" });
-  const refreshInterval = el("button", { type: "button", id: "ebb-refresh-interval", class: "ebb-button", text: "Update the simulated interval" });
+  const extend = el("button", { type: "button", id: "ebb-extend", class: "ebb-button", text: ACTIONS.extend });
+  const verify = el("button", { type: "button", id: "ebb-verify", class: "ebb-button", text: ACTIONS.verify });
+  const fit = el("button", { type: "button", id: "ebb-fit", class: "ebb-button", text: ACTIONS.fit });
+  const refreshInterval = el("button", { type: "button", id: "ebb-refresh-interval", class: "ebb-button", text: ACTIONS.refreshInterval });
   const existing = el(
     "section",
     { class: "ebb-existing", "aria-labelledby": "ebb-existing-title" },
@@ -167,7 +168,7 @@ export function buildPanelView(): PanelView {
     el("div", { class: "ebb-actions" }, extend, verify, fit, refreshInterval),
     el("p", {
       class: "ebb-hint",
-      text: "Add new actuals: select the history again, now with the new values below it, then press the button. Rows are added; nothing else changes.",
+      text: `${ACTIONS.extend}: type the new values below the history, then press the button (a ledger written before this panel knew its history: select that column first). Rows are added; nothing else changes.`,
     }),
   );
 

@@ -7,7 +7,7 @@
 import { readLedgerFromExcel, writeCellsToExcel, writeExtensionToExcel, writeLedgerToExcel } from "../../ledger/adapters/excelHost";
 import { cellAddress, rangeAddress } from "../../ledger/describe/addresses";
 import type { LedgerCell, LedgerDescription, LedgerExtension, LedgerReader } from "../../ledger";
-import type { LedgerLocation, PortValue, SheetBlock, WorkbookPort, WriteOutcome } from "../port";
+import type { LedgerLocation, PortValue, ProgressReport, SheetBlock, WorkbookPort, WriteOutcome } from "../port";
 
 const LEDGER_NAME = /^ebb_([A-Za-z0-9]+)_ledger$/i;
 
@@ -89,13 +89,13 @@ export class ExcelPort implements WorkbookPort {
     });
   }
 
-  async writeLedger(ledger: LedgerDescription, confirmed: boolean): Promise<WriteOutcome> {
-    const result = await writeLedgerToExcel(ledger, { confirmed });
+  async writeLedger(ledger: LedgerDescription, confirmed: boolean, onProgress?: ProgressReport): Promise<WriteOutcome> {
+    const result = await writeLedgerToExcel(ledger, { confirmed, onProgress });
     return result.status === "written" ? { status: "written" } : { status: "needs-confirmation", message: result.message };
   }
 
-  async writeExtension(extension: LedgerExtension): Promise<void> {
-    await writeExtensionToExcel(extension);
+  async writeExtension(extension: LedgerExtension, onProgress?: ProgressReport): Promise<void> {
+    await writeExtensionToExcel(extension, onProgress);
   }
 
   writeCells(sheet: string, cells: LedgerCell[]): Promise<void> {

@@ -1,6 +1,6 @@
 /** "Add new actuals": the values below the history a ledger was written from become new rows. */
 import { columnLetters } from "../../../ledger/describe/addresses";
-import { extendLedger, readLedger } from "../../../ledger";
+import { extendLedger, readLedger, type HistorySource } from "../../../ledger";
 import type { LedgerLocation } from "../../port";
 import { ask } from "../confirmStep";
 import { pickHistories, type HistoryPick } from "../historyPick";
@@ -13,7 +13,7 @@ export async function addNewActuals(ctx: ActionContext): Promise<void> {
   if (!loc) return;
   const read = await ctx.port.reader(loc.sheet, loc.cell);
   const { input } = readLedger(read, { sheet: loc.sheet, cell: loc.cell });
-  const history = await currentHistoryFor(ctx, loc);
+  const history = await currentHistoryFor(ctx, loc, input.source);
   if (!history) return;
   const known = Array.from(input.history, (v) => (v === undefined ? null : v));
   const mismatch = known.findIndex((v, t) => !sameActual(v, history.values[t] ?? null));
@@ -36,15 +36,15 @@ export async function addNewActuals(ctx: ActionContext): Promise<void> {
     ctx.say("Nothing added.");
     return;
   }
-  await ctx.port.writeExtension(ext);
+  await ctx.port.writeExtension(ext, (done, total) => ctx.progress.show(done, total, `Adding rows: ${Math.round((100 * done) / total)}%`));
   ctx.port.ledgerShown?.(ext.description);
   const count = added.length;
   ctx.say(`Added ${count} period${count > 1 ? "s" : ""} to the ledger on "${loc.sheet}"; the outlook and scorecard now start after period ${known.length + count}.`, "done");
 }
 
-/** The history to extend from: the source of a ledger written this session, else the selection. */
-async function currentHistoryFor(ctx: ActionContext, loc: LedgerLocation): Promise<HistoryPick | undefined> {
-  const source = ctx.sources.get(loc.tag);
+/** The history to extend from: the cells the ledger's actuals refer to, else the source of a ledger written this session, else the selection. */
+async function currentHistoryFor(ctx: ActionContext, loc: LedgerLocation, referred?: HistorySource): Promise<HistoryPick | undefined> {
+  const source = referred ? { ...referred, name: loc.sheet } : ctx.sources.get(loc.tag);
   if (source) {
     const last = await ctx.port.lastUsedRow(source.sheet);
     const block = await ctx.port.read(source.sheet, source.firstRow, source.col, Math.max(1, last - source.firstRow + 1), 1);

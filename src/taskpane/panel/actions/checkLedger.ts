@@ -1,13 +1,19 @@
-/** "Check against the engine": lists every cell that differs; each entry selects its cell. */
+/**
+ * "Check against the engine": lists every cell that was changed or differs, in sheet order,
+ * each entry selecting its cell; notices about numbers no formula can redo come last, in one line.
+ */
 import { verifyLedger } from "../../../ledger";
 import { el } from "../dom";
+import { yieldToPage } from "../progress";
 import type { ActionContext } from "./actionContext";
 import { requireLedger } from "./ledgerList";
 
 export async function checkLedger(ctx: ActionContext): Promise<void> {
-  const { port, view } = ctx;
+  const { port, view, progress } = ctx;
   const loc = await requireLedger(ctx);
   if (!loc) return;
+  progress.show(0, 1, `Checking the ledger on "${loc.sheet}"`);
+  await yieldToPage();
   const read = await port.reader(loc.sheet, loc.cell);
   const report = verifyLedger(read, { sheet: loc.sheet, cell: loc.cell });
   view.findingsList.replaceChildren(
@@ -17,11 +23,18 @@ export async function checkLedger(ctx: ActionContext): Promise<void> {
       button.addEventListener("click", () => void port.select(report.sheet, p.address, true));
       return el("li", {}, button);
     }),
+    ...report.notices.map((n) => {
+      const button = el("button", { type: "button", class: "ebb-finding ebb-notice", text: `Notice: ${n.message}` });
+      button.dataset.address = n.addresses[0];
+      button.addEventListener("click", () => void port.select(report.sheet, n.addresses[0], true));
+      return el("li", {}, button);
+    }),
   );
-  view.findings.hidden = report.problems.length === 0;
+  view.findings.hidden = report.problems.length === 0 && report.notices.length === 0;
   if (report.expected) port.ledgerShown?.(report.expected);
   if (report.ok) {
-    ctx.say(`All ${report.checked} cells of the ledger on "${loc.sheet}" match the engine.`, "done");
+    const notice = report.notices.length ? " See the notice below about the simulated interval." : "";
+    ctx.say(`All ${report.checked} cells of the ledger on "${loc.sheet}" match the engine.${notice}`, "done");
   } else {
     const n = report.problems.length;
     const follow = report.downstream.length ? ` ${report.downstream.length} more cell(s) differ only because they read those.` : "";

@@ -1,5 +1,5 @@
 /** "Write ledger": one ledger per chosen history, asking first before writing over anything. */
-import { describeLedger, type LedgerDescription, type LedgerInput } from "../../../ledger";
+import { defaultTag, describeLedger, uniqueTag, type LedgerDescription, type LedgerInput } from "../../../ledger";
 import { ask } from "../confirmStep";
 import { messageOf } from "../messages";
 import { formValues, type PanelView } from "../panelView";
@@ -44,13 +44,21 @@ export async function writeLedgers(ctx: ActionContext): Promise<void> {
     await yieldToPage();
     const taken = await port.sheetNames();
     const sheet = area?.sheet ?? (total === 1 && values.sheetName.trim() ? values.sheetName.trim() : sheetNameFor(pick.name, taken));
+    const cell = (area?.cell ?? "A1").replace(/\$/g, "").toUpperCase();
+    // A tag of its own, unless this replaces the ledger at the same place (then asked below).
+    const ledgers = await port.ledgers();
+    const replaced = ledgers.find((l) => l.sheet === sheet && l.cell.toUpperCase() === cell);
+    const tag = replaced ? replaced.tag : uniqueTag(defaultTag(sheet, cell), ledgers.map((l) => l.tag));
     const input: LedgerInput = {
       history: pick.values,
       name: pick.name,
       settings: { ...form.value.settings },
       horizon: form.value.horizon,
       coverage: form.value.coverage,
-      anchor: { sheet, cell: area?.cell ?? "A1" },
+      anchor: { sheet, cell },
+      tag,
+      // The actuals refer to the history's cells: a corrected history recomputes the ledger.
+      source: { sheet: pick.sheet, col: pick.col, firstRow: pick.firstRow },
     };
     let desc: LedgerDescription;
     try {
@@ -59,14 +67,16 @@ export async function writeLedgers(ctx: ActionContext): Promise<void> {
       ctx.say(`${pick.name}: ${messageOf(e)}${i > 0 ? ` (${i} ledger${i > 1 ? "s" : ""} written before this one)` : ""}`, "error");
       return;
     }
-    let outcome = await port.writeLedger(desc, false);
+    const report = (done: number, all: number) => progress.show(done, all, `Writing the ledger for ${pick.name}: ${Math.round((100 * done) / all)}%`);
+    let outcome = await port.writeLedger(desc, false, report);
     if (outcome.status === "needs-confirmation") {
-      const yes = await ask(view.confirm, `Ledger for "${pick.name}": ${outcome.message}`, "Write over it");
+      const over = replaced ? ` This replaces the ledger already at ${sheet}!${cell}.` : "";
+      const yes = await ask(view.confirm, `Ledger for "${pick.name}": ${outcome.message}${over}`, "Write over it");
       if (!yes) {
         ctx.say(`Nothing written for "${pick.name}".${written.length ? ` ${written.length} ledger(s) were written before it.` : ""}`);
         return;
       }
-      outcome = await port.writeLedger(desc, true);
+      outcome = await port.writeLedger(desc, true, report);
     }
     ctx.sources.set(desc.tag, pick);
     port.ledgerShown?.(desc);
