@@ -75,7 +75,8 @@ export function readOneSeries(value: unknown, name: string): SeriesInput {
 
 function seriesOf(cells: unknown[], label: string, where: (i: number) => string): SeriesInput | EbbError {
   try {
-    const values = cells.map((v, i) => numberCell(v, where(i), i === 0));
+    // The common cells (numbers, blanks) are read here; only others need the cell's name.
+    const values = cells.map((v, i) => (typeof v === "number" && Number.isFinite(v) ? v : v === null || v === undefined ? null : numberCell(v, where(i), i === 0)));
     let end = values.length;
     while (end > 0 && values[end - 1] === null) end--;
     if (end > MAX_SERIES_LENGTH) {
