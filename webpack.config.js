@@ -14,6 +14,7 @@ const path = require("path");
 const CopyWebpackPlugin = require("copy-webpack-plugin");
 const CustomFunctionsMetadataPlugin = require("custom-functions-metadata-plugin");
 const HtmlWebpackPlugin = require("html-webpack-plugin");
+const { MetadataFlagsPlugin } = require("./src/build/metadataFlags");
 
 const PORT = 3000;
 const FUNCTIONS_SOURCE = path.resolve(__dirname, "src/functions/functions.ts");
@@ -23,6 +24,20 @@ async function httpsOptions() {
   const devCerts = require("office-addin-dev-certs");
   const { ca, key, cert } = await devCerts.getHttpsServerOptions();
   return { ca, key, cert };
+}
+
+/** The dev server of `npm run start:host`: https on localhost only (never the local network). */
+function devServer(https, env = {}) {
+  return {
+    port: PORT,
+    host: "localhost",
+    server: { type: "https", options: https },
+    headers: { "Access-Control-Allow-Origin": "*" },
+    hot: false,
+    liveReload: false,
+    client: false,
+    onListening: env.sideload ? () => require("./manifest/sideload").sideload() : undefined,
+  };
 }
 
 module.exports = async (env = {}, argv = {}) => {
@@ -54,6 +69,7 @@ module.exports = async (env = {}, argv = {}) => {
     },
     plugins: [
       new CustomFunctionsMetadataPlugin({ output: "functions.json", input: FUNCTIONS_SOURCE }),
+      new MetadataFlagsPlugin("functions.json"),
       new HtmlWebpackPlugin({
         filename: "taskpane.html",
         template: "./src/taskpane/taskpane.html",
@@ -62,16 +78,7 @@ module.exports = async (env = {}, argv = {}) => {
       new CopyWebpackPlugin({ patterns: [{ from: "assets/*.png", to: "assets/[name][ext]" }] }),
     ],
     performance: { hints: false },
-    devServer: serving
-      ? {
-          port: PORT,
-          server: { type: "https", options: await httpsOptions() },
-          headers: { "Access-Control-Allow-Origin": "*" },
-          hot: false,
-          liveReload: false,
-          client: false,
-          onListening: env.sideload ? () => require("./manifest/sideload").sideload() : undefined,
-        }
-      : undefined,
+    devServer: serving ? devServer(await httpsOptions(), env) : undefined,
   };
 };
+module.exports.devServer = devServer;

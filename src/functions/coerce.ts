@@ -8,6 +8,7 @@
  */
 import { badInput, EbbError } from "../engine";
 import { InputError } from "./cells";
+import { basicValueOf } from "./dataTypes";
 
 /** Longest history (values up to the last one present) a worksheet function takes per series. */
 export const MAX_SERIES_LENGTH = 20000;
@@ -131,7 +132,8 @@ function capital(s: string): string {
 }
 
 /** One cell of a numeric range: a finite number, or null for a blank. */
-function numberCell(v: unknown, where: string, first: boolean): number | null {
+function numberCell(cell: unknown, where: string, first: boolean): number | null {
+  const v = basicValueOf(cell, () => capital(where));
   if (isBlank(v)) return null;
   if (typeof v === "number") {
     if (Number.isFinite(v)) return v;
@@ -157,9 +159,9 @@ function numberCell(v: unknown, where: string, first: boolean): number | null {
 
 /** A scalar argument: a one-cell range counts as its cell; a larger range is refused. */
 function scalar(v: unknown, name: string): unknown {
-  if (!Array.isArray(v)) return v;
+  if (!Array.isArray(v)) return basicValueOf(v, () => capital(name));
   const range = readRange(v, name);
-  if (range.length === 1 && range[0].length === 1) return range[0][0];
+  if (range.length === 1 && range[0].length === 1) return basicValueOf(range[0][0], () => capital(name));
   throw badInput("range-for-scalar", `${capital(name)} must be a single value, not a range of ${range.length} x ${range[0].length} cells.`);
 }
 

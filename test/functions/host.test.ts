@@ -85,3 +85,33 @@ test("an unexpected failure inside becomes #VALUE! with a message, never a raw e
   expect(e.code).toBe("#VALUE!");
   expect(e.message).toMatch(/^Ebb could not compute this result \(boom\)\./);
 });
+
+describe("cells holding data types (objects, as the platform's data types page describes them)", () => {
+  const history = () => asColumn(demo.columns[1].slice(0, 40));
+
+  test("a formatted number or a double counts as its basic value", () => {
+    const plain = host.ahead(history(), 12, 3);
+    const typed = history();
+    typed[5] = [{ type: "FormattedNumber", basicValue: typed[5][0], numberFormat: "#,##0" } as never];
+    typed[6] = [{ type: "Double", basicValue: typed[6][0] } as never];
+    expect(host.ahead(typed, 12, 3)).toEqual(plain);
+    expect(host.ahead(history(), { type: "Double", basicValue: 12 }, 3)).toEqual(plain);
+  });
+
+  test("an entity gets a plain message naming the cell, not 'holds the error Entity'", () => {
+    const typed = history();
+    typed[7] = [{ type: "Entity", text: "Seed trays", properties: {} } as never];
+    const e = thrown(() => host.fit(typed, 12));
+    expect(e.code).toBe("#VALUE!");
+    expect(e.message).toBe(
+      "Cell 8 of history holds a data type (Entity), not a number. Put the number itself in the cell (or a formula that takes the number from it).",
+    );
+  });
+
+  test("an error data type is named by its code", () => {
+    const typed = history();
+    typed[2] = [{ type: "Error", errorType: "Div0", basicValue: "#DIV/0!" } as never];
+    const e = thrown(() => host.fit(typed, 12));
+    expect(e.message).toMatch(/^Cell 3 of history holds the error #DIV\/0!\./);
+  });
+});

@@ -31,6 +31,7 @@ interface JsonFunction {
 }
 
 let functions: JsonFunction[] = [];
+let metadata: Record<string, unknown> = {};
 
 beforeAll(() => {
   const webpack = join(ROOT, "node_modules/webpack-cli/bin/cli.js");
@@ -42,7 +43,8 @@ beforeAll(() => {
   if (run.status !== 0) {
     throw new Error(`webpack build failed (exit ${run.status}):\n${run.stdout}\n${run.stderr}`);
   }
-  functions = JSON.parse(readFileSync(join(OUT, "functions.json"), "utf8")).functions;
+  metadata = JSON.parse(readFileSync(join(OUT, "functions.json"), "utf8"));
+  functions = metadata.functions as JsonFunction[];
 }, 600000);
 
 test("the build emits the functions bundle, the task pane page and the icons", () => {
@@ -53,6 +55,22 @@ test("the build emits the functions bundle, the task pane page and the icons", (
   expect(page).toMatch(/<script[^>]*\ssrc="?[^"\s>]*functions\.js/); // shared runtime: the page loads the functions
   const bundle = readFileSync(join(OUT, "functions.js"), "utf8");
   for (const spec of CATALOG) expect(bundle).toContain(`CustomFunctions.associate("${spec.name}"`);
+});
+
+test("functions.json lets error cells and data types reach the functions (flags added by src/build/metadataFlags.js)", () => {
+  // Without allowErrorForDataTypeAny the host answers for an error cell itself and Ebb's
+  // message naming the cell never shows (the platform's custom-functions JSON metadata page).
+  expect(metadata.allowErrorForDataTypeAny).toBe(true);
+  expect(metadata.allowCustomDataForDataTypeAny).toBe(true);
+  // The flag applies to parameters of type any: every single-value parameter is one.
+  const history = functions.find((f) => f.id === "AHEAD")!.parameters.find((p) => p.name === "period")!;
+  expect(history.type).toBe("any");
+});
+
+test("the dev server listens on localhost only", () => {
+  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  const config = require("../../webpack.config.js") as { devServer: (https: object, env: object) => { host?: string } };
+  expect(config.devServer({}, {}).host).toBe("localhost");
 });
 
 test("functions.json lists exactly the catalog's functions", () => {
