@@ -27,9 +27,10 @@ export interface StockBuffer extends LeadTimeDemand {
 /**
  * Safety stock and reorder point for a cycle service level, from the model's own lead-time error
  * (Silver, Pyke & Thomas 2017, Inventory and Production Management in Supply Chains, 4th ed.,
- * ch. 6-7: safety stock = k * sigma_L, reorder point s = forecast over L + k * sigma_L, with k the
- * standard normal quantile of the cycle service level; for periodic review the protection
- * interval is R + L and the figure is the order-up-to level). sigma_L comes from
+ * the chapters on individual items with probabilistic demand, cited from memory: safety stock =
+ * k * sigma_L, reorder point s = forecast over L + k * sigma_L, with k the standard normal quantile
+ * of the cycle service level; for periodic review the protection interval is R + L and the
+ * figure is the order-up-to level). sigma_L comes from
  * `leadTimeDemand`, which sums the h-step variances and their covariances (Hyndman et al. 2008).
  *
  * Example (hand computation, common practice for z): forecast 100 a period, L = 3, sigma_L = 20.98
