@@ -108,6 +108,32 @@ Example:
   ${RUN} buffer sales.csv --period 12 --seasonality auto --trend auto --lead-time 3 --service-level 0.95
 `;
 
+export const WATCH_HELP = `${INPUT}
+
+Which forecasts to look at this period: the review list of EBB.WATCH. Per series, the first
+status that applies:
+  too short                  the model cannot be fitted, or fewer than 6 one-step errors precede
+                             the signal's 6-period window
+  forecast too low / high    the windowed tracking signal is above +2.2 / below -2.2
+  worse than seasonal naive  refitted without the last season, the model's forecasts of that
+                             season miss by more than 1.1 x the seasonal naive forecast's
+  ok                         none of these
+Output, --format json: {"series": [{...}, ...], "statuses": {status: count, ...}}, one entry per
+column, with name and
+  watch: {status, tracking_signal, bias_percent, mase, naive_ratio, outside_band}
+tracking_signal: the sum of the last 6 one-step errors over sqrt(pi/2) x the MAD of the errors
+before them x sqrt(6) (a backward CUSUM; about 3% false alarms on an unbiased forecast).
+bias_percent: mean error of the last 6 periods as a percent of their mean actual. mase and
+naive_ratio: the last season's forecasts from the history before it. outside_band: how many of
+the last 6 actuals fell outside the one-step 95% band. Undefined values are null.
+${MODEL_NOTES}
+Output, --format csv: one row per series with columns
+  series, status, tracking_signal, bias_percent, mase, naive_ratio, outside_band, message
+
+Example:
+  ${RUN} watch sales.csv --period 12 --seasonality auto --trend auto --format csv
+`;
+
 export const LEDGER_HELP = `${INPUT}
 
 Writes an .xlsx workbook (--out, required) with the data and one update ledger per series:

@@ -19,4 +19,5 @@ export { detectPeriod } from "./period";
 export { acf, seasonalityTest90 } from "./acf";
 export * from "./accuracy";
 export { simulateFuture, SIMULATION_SEED } from "./simulate";
+export { watchSeries, WATCH_STATUSES, WATCH_RECENT, NAIVE_MARGIN, type WatchRow, type WatchStatus, type Fitter } from "./watch";
 export * from "./order";

@@ -1,12 +1,12 @@
 /**
- * The accuracy functions: one number per measure, the running tracking signal, and the whole
+ * The accuracy functions: one number per measure, the tracking signal, and the whole
  * table. Actual and forecast are ranges of the same size, one forecast per actual; a period
  * where either cell is blank is skipped.
  */
-import { accuracyTable, bias, cleanHistory, mad, mape, mase, mse, rmse, smape, theilU, trackingSignal } from "../engine";
+import { accuracyTable, bias, cleanHistory, mad, mape, mase, mse, rmse, parseTrackingForm, smape, theilU, trackingSignal } from "../engine";
 import { periodArg } from "./arguments";
-import { type Block, finiteNumber } from "./cells";
-import { readOneSeries, toFloat64 } from "./coerce";
+import { type Block, finiteNumber, optionalNumber } from "./cells";
+import { optionalWordArg, readOneSeries, toFloat64 } from "./coerce";
 
 function pairOf(actual: unknown, forecast: unknown): [Float64Array, Float64Array] {
   return [toFloat64(readOneSeries(actual, "actual").values), toFloat64(readOneSeries(forecast, "forecast").values)];
@@ -33,13 +33,13 @@ export function maseFn(actual: unknown, forecast: unknown, history: unknown, per
   return finiteNumber(mase(a, f, h, periodArg(period)), "MASE");
 }
 
-/** EBB.TRACKING: the running tracking signal, down to the last period with both values. */
-export function trackingFn(actual: unknown, forecast: unknown): Block {
+/** EBB.TRACKING: the tracking signal per period (blank until defined), down to the last period with both values. */
+export function trackingFn(actual: unknown, forecast: unknown, form: unknown): Block {
   const [a, f] = pairOf(actual, forecast);
-  const signal = trackingSignal(a, f);
+  const signal = trackingSignal(a, f, parseTrackingForm(optionalWordArg(form, "form")));
   let last = Math.min(a.length, f.length) - 1;
   while (last > 0 && (Number.isNaN(a[last]) || Number.isNaN(f[last]))) last--;
-  return Array.from(signal.subarray(0, last + 1), (v) => [finiteNumber(v, "tracking signal")]);
+  return Array.from(signal.subarray(0, last + 1), (v) => [optionalNumber(v, "tracking signal")]);
 }
 
 /** EBB.ACCURACY: a two-column table of measure names and values (an error cell where one is undefined). */

@@ -10,6 +10,7 @@ import type { Output } from "./cells";
 import { aheadFn, backtestFn, bandFn, fitFn, fittedFn, statesFn } from "./model";
 import { OPTION_WORDS_HELP } from "./optionWords";
 import { bufferFn, correctedFn, unusualFn } from "./order";
+import { fvaFn, watchFn } from "./signals";
 import { indicesFn, initFn, periodFn } from "./start";
 import { projectFn, stepFn } from "./state";
 
@@ -316,8 +317,18 @@ export const CATALOG: FunctionSpec[] = [
   }),
   defineFunction({
     name: "TRACKING",
-    description: "Running tracking signal (running sum of errors over running MAD); beyond +/-4 suggests a biased forecast.",
-    params: [ACTUAL, FORECAST],
+    description:
+      "Tracking signal per period: the sum of the last 6 errors over their expected spread (sqrt(pi/2) x the MAD of the errors before them, x sqrt(6)); beyond +/-2.2 the forecasts have leaned one way (about 3% false alarms on an unbiased forecast). Blank until 6 errors precede the window.",
+    params: [
+      ACTUAL,
+      FORECAST,
+      {
+        name: "form",
+        kind: "word",
+        optional: true,
+        help: "window (default, limit +/-2.2) or running: the running sum of all errors over the running MAD (limit +/-4), which grows with time and alarms on most long series.",
+      },
+    ],
     result: "matrix",
     size: (a) => ({ rows: arg(a, 0).rows * arg(a, 0).cols, cols: 1 }),
     run: trackingFn,
@@ -334,6 +345,30 @@ export const CATALOG: FunctionSpec[] = [
     result: "matrix",
     size: (a) => ({ rows: arg(a, 2).omitted ? 8 : 9, cols: 2 }),
     run: accuracyFn,
+  }),
+  defineFunction({
+    name: "WATCH",
+    description:
+      'Review list, one row per series: status ("too short", "forecast too low", "forecast too high", "worse than seasonal naive" or "ok"), tracking signal, bias over the last 6 periods as % of their mean, MASE of the last season forecast from the history before it, and how many of the last 6 actuals fell outside the one-step 95% band.',
+    params: [HISTORY, PERIOD, { name: "options", kind: "word", optional: true, help: OPTION_WORDS_HELP }],
+    result: "matrix",
+    size: (a) => ({ rows: seriesCount(arg(a, 0)), cols: 5 }),
+    run: watchFn,
+  }),
+  defineFunction({
+    name: "FVA",
+    description:
+      "Forecast value added (Gilliland): the measure for the seasonal naive forecast, the model forecast and the adjusted forecast (rows), and the value added over the step before and over seasonal naive (positive: the step made the forecast better).",
+    params: [
+      ACTUAL,
+      { name: "model_forecast", kind: "range", help: "The model's forecasts for the same periods, the same size as actual." },
+      { name: "adjusted_forecast", kind: "range", help: "The forecasts after the planner's adjustments, the same size as actual." },
+      { name: "measure", kind: "word", optional: true, help: "MAD (default), MAPE, MASE or bias." },
+      { ...PERIOD, optional: true, help: "Season length of the seasonal naive forecast, for example 12; 1 for the plain naive; 0 or blank detects it." },
+    ],
+    result: "matrix",
+    size: () => ({ rows: 3, cols: 4 }),
+    run: fvaFn,
   }),
   defineFunction({
     name: "CORRECTED",

@@ -245,13 +245,14 @@ export function mase(actual: any[][], forecast: any[][], history: any[][], perio
 }
 
 /**
- * Running tracking signal (running sum of errors over running MAD); beyond +/-4 suggests a biased forecast.
+ * Tracking signal per period: the sum of the last 6 errors over their expected spread (sqrt(pi/2) x the MAD of the errors before them, x sqrt(6)); beyond +/-2.2 the forecasts have leaned one way (about 3% false alarms on an unbiased forecast). Blank until 6 errors precede the window.
  * @customfunction TRACKING
  * @param actual Actuals, oldest first (a column or a row). Blank cells are skipped.
  * @param forecast Forecasts for the same periods, the same size as actual. Blank cells are skipped.
+ * @param form window (default, limit +/-2.2) or running: the running sum of all errors over the running MAD (limit +/-4), which grows with time and alarms on most long series.
  */
-export function tracking(actual: any[][], forecast: any[][]): any[][] {
-  return callHost("TRACKING", [actual, forecast]);
+export function tracking(actual: any[][], forecast: any[][], form?: string): any[][] {
+  return callHost("TRACKING", [actual, forecast, form]);
 }
 
 /**
@@ -264,6 +265,30 @@ export function tracking(actual: any[][], forecast: any[][]): any[][] {
  */
 export function accuracy(actual: any[][], forecast: any[][], history?: any[][], period?: any): any[][] {
   return callHost("ACCURACY", [actual, forecast, history, period]);
+}
+
+/**
+ * Review list, one row per series: status ("too short", "forecast too low", "forecast too high", "worse than seasonal naive" or "ok"), tracking signal, bias over the last 6 periods as % of their mean, MASE of the last season forecast from the history before it, and how many of the last 6 actuals fell outside the one-step 95% band.
+ * @customfunction WATCH
+ * @param history Actuals, oldest first: a column (or row), or a block with one product per column. Blank cells are missing; trailing blanks are ignored.
+ * @param period Season length, for example 12 for monthly data with a yearly pattern; 0 or blank detects it.
+ * @param options Model settings as plain words in any order: multiplicative or additive; linear, damped or none; decomposition, classic or optimized; "auto" chooses seasonality and trend. Blank: multiplicative linear, as in EBB.AHEAD.
+ */
+export function watch(history: any[][], period: any, options?: string): any[][] {
+  return callHost("WATCH", [history, period, options]);
+}
+
+/**
+ * Forecast value added (Gilliland): the measure for the seasonal naive forecast, the model forecast and the adjusted forecast (rows), and the value added over the step before and over seasonal naive (positive: the step made the forecast better).
+ * @customfunction FVA
+ * @param actual Actuals, oldest first (a column or a row). Blank cells are skipped.
+ * @param model_forecast The model's forecasts for the same periods, the same size as actual.
+ * @param adjusted_forecast The forecasts after the planner's adjustments, the same size as actual.
+ * @param measure MAD (default), MAPE, MASE or bias.
+ * @param period Season length of the seasonal naive forecast, for example 12; 1 for the plain naive; 0 or blank detects it.
+ */
+export function fva(actual: any[][], model_forecast: any[][], adjusted_forecast: any[][], measure?: string, period?: any): any[][] {
+  return callHost("FVA", [actual, model_forecast, adjusted_forecast, measure, period]);
 }
 
 /**

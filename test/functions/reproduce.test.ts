@@ -105,7 +105,7 @@ describe("accuracy functions, by hand", () => {
   const grid: Cell[][] = [
     [10, 11, "=EBB.MAD(A1:A4, B1:B4)", "=EBB.MSE(A1:A4, B1:B4)", "=EBB.RMSE(A1:A4, B1:B4)", "=EBB.BIAS(A1:A4, B1:B4)"],
     [12, 10, "=EBB.MAPE(A1:A4, B1:B4)", "=EBB.SMAPE(A1:A4, B1:B4)", "=EBB.ACCURACY(A1:A4, B1:B4)", null],
-    [8, 8, "=EBB.TRACKING(A1:A4, B1:B4)", null, null, null],
+    [8, 8, "=EBB.TRACKING(A1:A4, B1:B4, \"running\")", null, null, null],
     [null, 9, null, null, null, null],
   ];
   const { hf, sheet } = workbook(grid);

@@ -4,9 +4,10 @@ import type { BatchCommand } from "./batch";
 import { bufferCommand } from "./buffer";
 import { fitCommand } from "./fit";
 import { statesCommand } from "./states";
+import { watchCommand } from "./watch";
 
 /** Every batch command, in the order of the program's help. Add a command here. */
-export const BATCH_COMMANDS: readonly BatchCommand[] = [fitCommand, statesCommand, aheadCommand, backtestCommand, bufferCommand];
+export const BATCH_COMMANDS: readonly BatchCommand[] = [fitCommand, statesCommand, aheadCommand, backtestCommand, bufferCommand, watchCommand];
 
 export function findCommand(name: string): BatchCommand {
   const command = BATCH_COMMANDS.find((c) => c.name === name);

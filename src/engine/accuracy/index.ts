@@ -6,7 +6,21 @@ export { mape } from "./mape";
 export { smape } from "./smape";
 export { mase, maseScale } from "./mase";
 export { bias } from "./bias";
-export { trackingSignal, runningErrorSum } from "./tracking";
+export {
+  trackingSignal,
+  windowSignal,
+  runningErrorSum,
+  parseTrackingForm,
+  trackingLimit,
+  TRACKING_WINDOW,
+  TRACKING_LIMIT,
+  TRACKING_BASELINE,
+  RUNNING_LIMIT,
+  MEAN_ABS_TO_SD,
+  TRACKING_FORMS,
+  type TrackingForm,
+} from "./tracking";
 export { runningMad } from "./runningMad";
 export { theilU } from "./theilU";
 export { accuracyTable, type AccuracyRow } from "./table";
+export { forecastValueAdded, parseFvaMeasure, FVA_MEASURES, type FvaMeasure, type FvaResult, type FvaStep } from "./fva";

@@ -1,4 +1,4 @@
-import { EbbError } from "../errors";
+import { EbbError, notEnough } from "../errors";
 import { detectPeriod } from "../period";
 import { bias } from "./bias";
 import { mad } from "./mad";
@@ -9,7 +9,7 @@ import { pairs } from "./pairs";
 import { rmse } from "./rmse";
 import { smape } from "./smape";
 import { theilU } from "./theilU";
-import { trackingSignal } from "./tracking";
+import { TRACKING_BASELINE, trackingSignal } from "./tracking";
 
 /**
  * One row of the accuracy table: the measure's name and its value, or the EbbError that says why
@@ -22,8 +22,8 @@ export type AccuracyRow = [name: string, value: number | EbbError];
  * All accuracy measures of a forecast at once, as [name, value] rows for a two-column table
  * (the EBB.ACCURACY worksheet function), in this order:
  *
- * MAD, MSE, RMSE, MAPE (%), sMAPE (%), Bias, Tracking signal (the final value of the running
- * signal), Theil's U2, and MASE when a history is given.
+ * MAD, MSE, RMSE, MAPE (%), sMAPE (%), Bias, Tracking signal (the final value of the windowed
+ * signal, an #N/A row until it is defined), Theil's U2, and MASE when a history is given.
  *
  * Errors that concern the whole table (ranges of different length, an infinite value, no
  * period with both an actual and a forecast) are thrown. A measure that is undefined for these
@@ -40,7 +40,7 @@ export type AccuracyRow = [name: string, value: number | EbbError];
  * @example
  * accuracyTable([10, 12, 8], [11, 10, 8])
  * // [["MAD", 1], ["MSE", 1.667], ["RMSE", 1.291], ["MAPE (%)", 8.889], ["sMAPE (%)", 9.235],
- * //  ["Bias", 0.333], ["Tracking signal", 1], ["Theil's U2", 0.514]]
+ * //  ["Bias", 0.333], ["Tracking signal", #N/A: too few errors], ["Theil's U2", 0.514]]
  */
 export function accuracyTable(
   actual: ArrayLike<number>,
@@ -67,7 +67,11 @@ export function accuracyTable(
   add("Bias", () => bias(actual, forecast));
   add("Tracking signal", () => {
     const ts = trackingSignal(actual, forecast);
-    return ts[ts.length - 1];
+    const last = ts[ts.length - 1];
+    if (last !== last) {
+      throw notEnough(TRACKING_BASELINE + 1, pairs(actual, forecast, "Accuracy").count, "periods with both an actual and a forecast", "The tracking signal needs 6 errors before its 6-period window.");
+    }
+    return last;
   });
   add("Theil's U2", () => theilU(actual, forecast));
   if (history !== undefined) {

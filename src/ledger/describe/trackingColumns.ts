@@ -24,7 +24,7 @@ export interface TrackingFigures {
 
 /** The engine's tracking figures over the update periods. */
 export function trackingFigures(actual: Float64Array, forecast: Float64Array, errors: Float64Array): TrackingFigures {
-  const signal = trackingSignal(actual, forecast);
+  const signal = trackingSignal(actual, forecast, "running");
   return {
     errorSum: runningErrorSum(errors),
     runningMad: Array.from(runningMad(errors), (v) => (Number.isNaN(v) ? null : v)),
