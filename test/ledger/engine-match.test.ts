@@ -55,7 +55,7 @@ describe("ledger formulas in HyperFormula equal the engine", () => {
       }
       const y = model.history.subarray(fu);
       const f = states.forecast.subarray(fu);
-      const ts = trackingSignal(y, f);
+      const ts = trackingSignal(y, f, "running");
       updates.forEach(({ row, period }, i) => close(at(row, "tracking"), ts[i], `tracking signal of period ${period}`));
 
       L.outlook.rows.forEach((o, i) => {
