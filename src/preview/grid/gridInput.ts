@@ -1,6 +1,7 @@
 /**
  * Mouse and keyboard on the grid: click, shift-click and drag select; a column header selects
- * its used part; keys move, stretch, clear or start an edit (see gridKeys for the mapping).
+ * its used part, and shift-click on another header stretches that to every column between;
+ * keys move, stretch, clear or start an edit (see gridKeys for the mapping).
  */
 import type { PreviewWorkbook } from "../workbook/previewWorkbook";
 import type { CellEditor } from "./cellEditor";
@@ -39,7 +40,8 @@ function onMouseDown(parts: GridInputParts, e: MouseEvent, startDrag: () => void
   const head = (e.target as HTMLElement).closest("th.col-head") as HTMLElement | null;
   if (head) {
     e.preventDefault();
-    selectColumn(parts, Number(head.dataset.col));
+    editor.commitOpen();
+    selectColumn(parts, Number(head.dataset.col), e.shiftKey);
     return;
   }
   const pos = table.posOf(e.target);
@@ -83,10 +85,14 @@ function onKey(parts: GridInputParts, e: KeyboardEvent): void {
   }
 }
 
-/** The used part of a column: from row 1 to the sheet's last used row. */
-function selectColumn(parts: GridInputParts, col: number): void {
+/**
+ * The used part of a column: from row 1 to the sheet's last used row. With `extend` (shift-click
+ * on a header) it reaches from the column the selection started in to this one: B then F is B1:F85.
+ */
+function selectColumn(parts: GridInputParts, col: number, extend = false): void {
   const last = Math.max(0, parts.workbook.size(parts.state.sheet).rows - 1);
-  parts.setSelection({ anchor: { row: last, col }, active: { row: 0, col } });
+  const from = extend ? parts.state.sel.anchor.col : col;
+  parts.setSelection({ anchor: { row: last, col: from }, active: { row: 0, col } });
 }
 
 function clearSelection(parts: GridInputParts): void {
@@ -96,8 +102,9 @@ function clearSelection(parts: GridInputParts): void {
     for (let col = r.left; col <= r.right; col++) {
       const view = workbook.cell(state.sheet, row, col);
       if (view.spill === "part") continue; // cleared with its formula cell
-      const result = workbook.setInput(state.sheet, row, col, "");
+      const result = workbook.setInput(state.sheet, row, col, "", false);
       if (!result.ok) events.editRefused(result.message);
     }
   }
+  workbook.respillCleared(state.sheet);
 }

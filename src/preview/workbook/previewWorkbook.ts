@@ -38,6 +38,17 @@ type Listener = () => void;
 
 interface ArrayVertexLike {
   getRangeOrUndef(): { start: SimpleCellAddress; end: SimpleCellAddress } | undefined;
+  getFormula(service: unknown): unknown;
+}
+
+/**
+ * The engine's own spill-size rule (the catalog's size rules through the function plugin). The
+ * engine does not export it, so it is read here and used only when present: without it the
+ * #SPILL! message stays general and a blocked block comes back once its formula is re-entered.
+ */
+interface EngineInternals {
+  _lazilyTransformingAstService?: unknown;
+  _crudOperations?: { operations?: { arraySizePredictor?: { checkArraySize(ast: unknown, at: SimpleCellAddress): { width: number; height: number } } } };
 }
 
 export class PreviewWorkbook {
@@ -105,7 +116,8 @@ export class PreviewWorkbook {
     const range = role === "none" ? undefined : this.spillRangeOf(address);
     const base = { spill: role, spillRange: range ? rangeText(range) : undefined, hasFormula };
     if (raw instanceof DetailedCellError) {
-      return { ...base, kind: "error", text: raw.value, value: raw.value, error: { code: raw.value, message: raw.message || describeCode(raw.value) } };
+      const message = raw.value === "#SPILL!" ? this.spillMessage(address) : raw.message || describeCode(raw.value);
+      return { ...base, kind: "error", text: raw.value, value: raw.value, error: { code: raw.value, message } };
     }
     if (raw === null || raw === undefined) return { ...base, kind: "empty", text: "", value: null };
     if (typeof raw === "number") return { ...base, kind: "number", text: numberText(raw), value: raw };
@@ -134,15 +146,17 @@ export class PreviewWorkbook {
 
   /**
    * Sets a cell from what a person typed: "=..." is a formula, a number is a number, empty text
-   * clears the cell, anything else is text. Returns a message instead of throwing.
+   * clears the cell, anything else is text. Returns a message instead of throwing. With
+   * `respill` false the caller calls respillCleared once after a run of edits.
    */
-  setInput(sheet: string, row: number, col: number, text: string): { ok: true } | { ok: false; message: string } {
+  setInput(sheet: string, row: number, col: number, text: string, respill = true): { ok: true } | { ok: false; message: string } {
     const address = { sheet: this.sheetId(sheet), row, col };
     if (!this.hf.isItPossibleToSetCellContents(address)) {
       return { ok: false, message: `${a1(row, col)} cannot be changed here.` };
     }
     try {
       this.hf.setCellContents(address, [[parseInput(text)]]);
+      if (respill) this.respillCleared(sheet);
       return { ok: true };
     } catch (e) {
       return { ok: false, message: `${a1(row, col)} was not changed: ${e instanceof Error ? e.message : String(e)}` };
@@ -154,6 +168,68 @@ export class PreviewWorkbook {
     const start = a1(rect.top, rect.left);
     const end = a1(rect.bottom, rect.right);
     return `${quoteSheet(sheet)}!${start === end ? start : `${start}:${end}`}`;
+  }
+
+  /**
+   * Blocked results whose way is now clear spill again at once, as a spreadsheet does (the
+   * engine itself only retries when the formula is entered again). Called after every edit.
+   */
+  respillCleared(sheetName: string): void {
+    const sheet = this.sheetId(sheetName);
+    const formulas = this.hf.getSheetFormulas(sheet);
+    formulas.forEach((line, row) =>
+      line.forEach((formula, col) => {
+        if (formula === undefined) return;
+        const at = { sheet, row, col };
+        const value = this.hf.getCellValue(at);
+        if (!(value instanceof DetailedCellError) || value.value !== "#SPILL!") return;
+        const blockers = this.spillBlockers(at);
+        if (blockers && blockers.length === 0) this.hf.setCellContents(at, [[formula]]);
+      }),
+    );
+  }
+
+  /** The cells a formula's result needs (its own first), or undefined when the engine cannot say. */
+  private spillArea(at: SimpleCellAddress): CellRect | undefined {
+    const engine = this.hf as unknown as EngineInternals;
+    const predictor = engine._crudOperations?.operations?.arraySizePredictor;
+    const vertex = this.hf.dependencyGraph.getCell(at) as unknown as Partial<ArrayVertexLike> | undefined;
+    if (!predictor || !vertex || typeof vertex.getFormula !== "function") return undefined;
+    try {
+      const size = predictor.checkArraySize(vertex.getFormula(engine._lazilyTransformingAstService), at);
+      if (!(size.width >= 1 && size.height >= 1)) return undefined;
+      return { top: at.row, left: at.col, bottom: at.row + size.height - 1, right: at.col + size.width - 1 };
+    } catch {
+      return undefined;
+    }
+  }
+
+  /** Cells that stand in a blocked result's way: holding something, or part of another block. */
+  private spillBlockers(at: SimpleCellAddress): SimpleCellAddress[] | undefined {
+    const area = this.spillArea(at);
+    if (!area) return undefined;
+    const out: SimpleCellAddress[] = [];
+    for (let row = area.top; row <= area.bottom; row++) {
+      for (let col = area.left; col <= area.right; col++) {
+        if (row === at.row && col === at.col) continue;
+        const cell = { sheet: at.sheet, row, col };
+        const typed = this.hf.getCellSerialized(cell);
+        if ((typed !== null && typed !== undefined && typed !== "") || this.hf.isCellPartOfArray(cell)) out.push(cell);
+      }
+    }
+    return out;
+  }
+
+  /** #SPILL! in words: the area the result needs and the cells in its way. */
+  private spillMessage(at: SimpleCellAddress): string {
+    const area = this.spillArea(at);
+    const blockers = this.spillBlockers(at);
+    if (!area || !blockers || blockers.length === 0) return describeCode("#SPILL!");
+    const named = blockers.slice(0, 3).map((c) => a1(c.row, c.col));
+    const more = blockers.length > 3 ? ` and ${blockers.length - 3} more` : "";
+    const cells = `${named.join(", ")}${more}`;
+    const one = blockers.length === 1;
+    return `The result needs ${a1(area.top, area.left)}:${a1(area.bottom, area.right)}, and ${cells} ${one ? "is" : "are"} in the way. Clear ${one ? "that cell" : "those cells"} (or move the formula) and the result appears.`;
   }
 
   private spillRole(address: SimpleCellAddress): SpillRole {

@@ -1,0 +1,74 @@
+/**
+ * The preview grid behaves like a spreadsheet where a planner expects it to, in Debian's
+ * Chromium: shift-click on column headers selects every column between (common practice in
+ * spreadsheets), and a spilled block blocked by a typed cell names that cell and comes back
+ * as soon as the cell is cleared.
+ */
+import { mkdirSync } from "fs";
+import { join } from "path";
+import type { Page } from "playwright-core";
+import { describeWithChromium, launchChromium, requireChromium, type Browser } from "./support/chromium";
+import { REPO, startPreviewServer, type PreviewServer } from "./support/previewServer";
+
+const ARTIFACTS = join(REPO, "test-artifacts");
+
+async function openPreview(page: Page, url: string): Promise<void> {
+  await page.goto(url);
+  await page.waitForSelector("body[data-ready=true]");
+}
+
+async function typeInto(page: Page, address: string, text: string): Promise<void> {
+  await page.click(`td[data-cell="${address}"]`);
+  if (text === "") await page.keyboard.press("Delete");
+  else {
+    await page.keyboard.type(text);
+    await page.keyboard.press("Enter");
+  }
+}
+
+const shown = (page: Page, address: string) => page.textContent(`td[data-cell="${address}"]`);
+
+describeWithChromium("the preview grid as a spreadsheet", () => {
+  let server: PreviewServer | undefined;
+  let browser: Browser | undefined;
+
+  beforeAll(async () => {
+    requireChromium();
+    mkdirSync(ARTIFACTS, { recursive: true });
+    server = await startPreviewServer();
+    browser = await launchChromium();
+  }, 300_000);
+
+  afterAll(async () => {
+    await browser?.close();
+    await server?.stop();
+  });
+
+  test("header B, then shift-click header F: B1:F85 (the used rows of columns B to F)", async () => {
+    const page = browser!.page;
+    await openPreview(page, server!.url);
+    await page.click('th.col-head[data-col="1"]');
+    await page.click('th.col-head[data-col="5"]', { modifiers: ["Shift"] });
+    const selected = await page.$$eval('td[aria-selected="true"]', (tds) => (tds as HTMLElement[]).map((t) => t.dataset.cell!));
+    const cols = new Set(selected.map((a) => a.replace(/\d+$/, "")));
+    const rows = selected.map((a) => Number(a.replace(/^[A-Z]+/, "")));
+    expect([...cols].sort()).toEqual(["B", "C", "D", "E", "F"]);
+    expect([Math.min(...rows), Math.max(...rows)]).toEqual([1, 85]); // the demo's heading row and 84 months
+    expect(selected.length).toBe(5 * 85);
+  });
+
+  test("J6 typed inside the I5 block: #SPILL! names J6; clearing J6 brings the block back", async () => {
+    const page = browser!.page;
+    await openPreview(page, server!.url);
+    const before = await page.getAttribute('td[data-cell="I5"]', "data-value");
+    expect(Number(before)).toBeGreaterThan(0);
+    await typeInto(page, "J6", "5");
+    expect(await shown(page, "I5")).toBe("#SPILL!");
+    await page.click('td[data-cell="I5"]');
+    expect(await page.textContent("#cell-note")).toMatch(/needs I5:M16, and J6 is in the way\. Clear that cell/);
+    await page.screenshot({ path: join(ARTIFACTS, "preview-spill-blocked.png") });
+    await typeInto(page, "J6", "");
+    expect(await shown(page, "I5")).not.toBe("#SPILL!");
+    expect(await page.getAttribute('td[data-cell="I5"]', "data-value")).toBe(before);
+  });
+});
