@@ -39,7 +39,13 @@ export const LAYOUT = {
   accuracyTitleRow: 46,
   accuracyHeadRow: 47,
   accuracyFirstRow: 48,
+  watchTitleRow: 58,
+  watchHeadRow: 59,
+  watchFirstRow: 60,
 } as const;
+
+/** Column heads of the review list (EBB.WATCH returns these five columns, one row per product). */
+export const WATCH_HEADS = ["Status", "Tracking signal", "Bias (% of mean)", "MASE", "Outside 95% band"];
 
 export const FIT_LABELS = ["Seasonality", "Trend", "alpha", "beta", "gamma", "phi", "SSE", "RMSE", "AICc"];
 
@@ -120,6 +126,11 @@ export function buildDemoWorkbook(csvText: string, notice: string): DemoWorkbook
     put(L.accuracyHeadRow, v(2 * k), nameRef(k));
     put(L.accuracyFirstRow, v(2 * k), `=EBB.ACCURACY(${hist}, EBB.FITTED(${hist}, ${DEMO_PERIOD}), ${hist}, ${DEMO_PERIOD})`);
   }
+
+  put(L.watchTitleRow, L.labelCol, 'Which forecasts to look at this month (EBB.WATCH with the automatic model, one formula for all products)');
+  WATCH_HEADS.forEach((head, i) => put(L.watchHeadRow, v(i), head));
+  for (let k = 0; k < productCount; k++) put(L.watchFirstRow + k, L.labelCol, nameRef(k));
+  put(L.watchFirstRow, L.firstValueCol, `=EBB.WATCH(${all}, ${DEMO_PERIOD}, "auto")`);
 
   const corrections = buildCorrectionsSheet(
     data.map((line) => line[0]),
