@@ -57,6 +57,22 @@ describeWithChromium("the preview grid as a spreadsheet", () => {
     expect(selected.length).toBe(5 * 85);
   });
 
+  test('"Invented demo data" is said once on the first screen; the fitted SSE reads as a planner\'s number', async () => {
+    const page = browser!.page;
+    await openPreview(page, server!.url);
+    const text = await page.evaluate(() => document.body.innerText);
+    expect(text.match(/invented demo data/gi)?.length).toBe(1);
+    // EBB.FIT at I35 spills 9 rows per product; the 7th is the SSE (demo layout, FIT_LABELS).
+    const sse = await page.$$eval('td[data-cell^="I41"], td[data-cell^="J41"], td[data-cell^="K41"]', (tds) =>
+      (tds as HTMLElement[]).map((t) => [t.dataset.value, t.textContent]),
+    );
+    expect(sse.length).toBe(3);
+    for (const [value, shown] of sse) {
+      expect(shown).not.toMatch(/e[+-]/i);
+      expect(Number(shown!.replace(/,/g, ""))).toBeCloseTo(Number(value), -1); // the same figure, rounded for reading
+    }
+  });
+
   test("J6 typed inside the I5 block: #SPILL! names J6; clearing J6 brings the block back", async () => {
     const page = browser!.page;
     await openPreview(page, server!.url);

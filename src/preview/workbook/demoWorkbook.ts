@@ -93,7 +93,8 @@ export function buildDemoWorkbook(csvText: string, notice: string): DemoWorkbook
   const nameRef = (k: number): string => `=${columnLetters(1 + k)}1`;
   const v = (k: number): number => L.firstValueCol + k;
 
-  put(L.noticeRow, L.labelCol, `${notice} ${CAUTIONS}`);
+  // The page's header says "invented data" once for the whole preview; the sheet carries the cautions.
+  put(L.noticeRow, L.labelCol, CAUTIONS);
 
   put(L.aheadTitleRow, L.labelCol, `Next ${DEMO_HORIZON} months: forecast from the latest actuals (EBB.AHEAD, one formula for all products)`);
   put(L.aheadHeadRow, L.labelCol, "Months ahead");
