@@ -133,7 +133,8 @@ export function scoreForecastPackage(run: ReferenceRun, series: M3Series[], boar
     for (const method of ["ets", "theta"] as const) {
       const f = byKey.get(`${s.id}|${method}`);
       const key = `fc-${method}`;
-      if (!usable(f, s.horizon)) {
+      // thetaf reports no in-sample SSE: only the forecast must be complete.
+      if (!f?.forecast || f.forecast.length !== s.horizon || !f.forecast.every(Number.isFinite)) {
         summary.failures++;
         board.add(key, s, seasonalNaive(s.train, s.period, s.horizon));
         board.noteStandIn(key);
@@ -141,7 +142,7 @@ export function scoreForecastPackage(run: ReferenceRun, series: M3Series[], boar
       }
       summary.seconds[method][s.frequency].push(f.seconds);
       board.add(key, s, f.forecast);
-      tallyIntervals(coverage, key, s, f);
+      tallyIntervals(coverage, key, s, f as ReferenceFit);
     }
   }
   return summary;
