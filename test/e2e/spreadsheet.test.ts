@@ -73,6 +73,20 @@ describeWithChromium("the preview grid as a spreadsheet", () => {
     }
   });
 
+  test("interval headers wrap in full, so low can be told from high (I19, J19)", async () => {
+    const page = browser!.page;
+    await openPreview(page, server!.url);
+    for (const [address, end] of [["I19", ": low"], ["J19", ": high"], ["H4", "Months ahead"]]) {
+      const seen = await page.$eval(`td[data-cell="${address}"]`, (td) => ({
+        text: td.textContent ?? "",
+        cut: td.scrollWidth > td.clientWidth + 1 || td.scrollHeight > td.clientHeight + 1,
+      }));
+      expect(seen.text.endsWith(end)).toBe(true);
+      expect(seen.cut).toBe(false);
+    }
+    await page.screenshot({ path: join(ARTIFACTS, "preview-headers.png") });
+  });
+
   test("J6 typed inside the I5 block: #SPILL! names J6; clearing J6 brings the block back", async () => {
     const page = browser!.page;
     await openPreview(page, server!.url);

@@ -16,6 +16,7 @@ function start(): void {
   const { workbook, demo } = openDemoWorkbook(csvText, EBB_DEMO_NOTICE);
   const view = new WorkbookView(workbook);
   for (const [sheet, widths] of Object.entries(demo.widths)) view.grid.setColumnWidths(sheet, widths);
+  for (const [sheet, cells] of Object.entries(demo.headers)) view.decor.addRoles(sheet, cells.map((c) => ({ ...c, role: "header" })));
   const area = document.getElementById("workbook") as HTMLElement;
   area.replaceChildren(view.element);
   view.showSheet(SALES_SHEET);

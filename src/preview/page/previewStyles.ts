@@ -43,7 +43,8 @@ body { margin: 0; font: 14px/1.4 system-ui, "Segoe UI", Roboto, Arial, sans-seri
 .grid td.role-title { font-weight: 700; font-size: 15px; color: #23404a; }
 .grid td.role-subtitle, .grid td.role-explain, .grid td.role-linked { font-style: italic; color: #4a5f69; }
 .grid td.role-heading { font-weight: 700; color: #23404a; }
-.grid td.role-header { font-weight: 700; color: #23404a; background: #dde7e4; }
+.grid td.role-header { font-weight: 700; color: #23404a; background: #dde7e4; white-space: normal; overflow-wrap: anywhere; line-height: 1.2; padding: 2px 4px; vertical-align: bottom; }
+.grid td.role-header .overflow-text { white-space: normal; }
 .grid td.role-input { font-weight: 700; background: #fbefc8; }
 .grid td.role-written { color: #595959; }
 .grid td.role-actual { background: #eef3f7; }

@@ -32,6 +32,13 @@ export class DecorStore {
     for (const c of cells) map.set(`${c.row},${c.col}`, { format: c.format, role: c.role, note: c.note });
   }
 
+  /** A style role for plain cells (the demo's header rows: role "header" wraps its text). */
+  addRoles(sheet: string, cells: { row: number; col: number; role: string }[]): void {
+    let map = this.cells.get(sheet);
+    if (!map) this.cells.set(sheet, (map = new Map()));
+    for (const c of cells) map.set(`${c.row},${c.col}`, { ...map.get(`${c.row},${c.col}`), role: c.role });
+  }
+
   setFlags(sheet: string, flags: ConditionalFlag[]): void {
     const areas: FlagArea[] = [];
     for (const f of flags) {

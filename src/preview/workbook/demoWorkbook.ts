@@ -56,6 +56,8 @@ export interface DemoWorkbook {
   productCount: number;
   /** Column widths (pixels) per sheet, by column index. */
   widths: Record<string, Record<number, number>>;
+  /** Header cells per sheet: shown in full (wrapped), so "...: low" and "...: high" can be told apart. */
+  headers: Record<string, { row: number; col: number }[]>;
 }
 
 /** The history range of product k (0-based), e.g. B2:B200. */
@@ -148,7 +150,20 @@ export function buildDemoWorkbook(csvText: string, notice: string): DemoWorkbook
     sheets: { [SALES_SHEET]: sales, [CORRECTIONS_SHEET]: corrections.cells, [README_SHEET]: readme },
     productCount,
     widths: { [SALES_SHEET]: widths, [CORRECTIONS_SHEET]: corrections.widths, [README_SHEET]: { 0: 900 } },
+    headers: {
+      [SALES_SHEET]: [
+        ...headerCells(sales, [0], 0, productCount), // the product names above the actuals
+        ...headerCells(sales, [L.aheadHeadRow, L.bandHeadRow, L.fitHeadRow, L.accuracyHeadRow], L.labelCol, Infinity),
+      ],
+    },
   };
+}
+
+/** Every filled cell of the given rows from column `first` to `last`. */
+function headerCells(cells: RawCellContent[][], rows: number[], first: number, last: number): { row: number; col: number }[] {
+  return rows.flatMap((row) =>
+    (cells[row] ?? []).flatMap((v, col) => (v === null || v === undefined || col < first || col > last ? [] : [{ row, col }])),
+  );
 }
 
 function readmeLines(notice: string): string[] {
