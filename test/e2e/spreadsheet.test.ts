@@ -87,6 +87,22 @@ describeWithChromium("the preview grid as a spreadsheet", () => {
     await page.screenshot({ path: join(ARTIFACTS, "preview-headers.png") });
   });
 
+  test("a short selection (B2:B15) is warned with what is needed, and its ledger sheet is named after the series", async () => {
+    const page = browser!.page;
+    await openPreview(page, server!.url);
+    await page.click('td[data-cell="B2"]');
+    await page.click('td[data-cell="B15"]', { modifiers: ["Shift"] });
+    await page.click("#ebb-pick");
+    await page.waitForFunction(() => !document.querySelector(".ebb-panel")!.hasAttribute("aria-busy"));
+    expect(await page.textContent("#ebb-message")).toMatch(/^Only 14 values and no season found: .*needs at least 36 values/);
+    await page.click("#ebb-write");
+    await page.waitForFunction(() => !document.querySelector(".ebb-panel")!.hasAttribute("aria-busy"));
+    const sheet = await page.evaluate(
+      () => (window as unknown as { ebbPreview: { port: { lastLedger: { sheet: string } } } }).ebbPreview.port.lastLedger.sheet,
+    );
+    expect(sheet).toBe("Ledger Seed trays (units)");
+  });
+
   test("J6 typed inside the I5 block: #SPILL! names J6; clearing J6 brings the block back", async () => {
     const page = browser!.page;
     await openPreview(page, server!.url);

@@ -2,7 +2,7 @@
  * Turning the selected cells into histories: one per column, a text first cell taken as the
  * header, numbers and blanks below it. Anything else gets a message naming the cell.
  */
-import { cleanHistory, detectPeriod } from "../../engine";
+import { cleanHistory, detectPeriod, modelShape, requiredLength, shapeConstants } from "../../engine";
 import { columnLetters } from "../../ledger/describe/addresses";
 import type { PortValue, SheetBlock } from "../port";
 
@@ -14,7 +14,7 @@ export interface HistoryPick {
   headerRow?: number;
   /** 0-based row of the first value. */
   firstRow: number;
-  /** Header text, or the cell range when there is no header. */
+  /** Header text; without one, the column's heading in row 1 (when text) or "Sales column B". */
   name: string;
   /** Values oldest first; null for a blank cell; trailing blanks dropped. */
   values: (number | null)[];
@@ -65,9 +65,7 @@ function pickColumn(block: SheetBlock, c: number): { ok: true; pick: HistoryPick
     return { ok: false, message: `The column ${columnLetters(col)} of the selection holds no numbers. Select the actuals, oldest at the top.` };
   }
   const firstRow = block.top + (hasHeader ? 1 : 0);
-  const name = hasHeader
-    ? String(first).trim()
-    : `${block.sheet}!${columnLetters(col)}${firstRow + 1}:${columnLetters(col)}${firstRow + values.length}`;
+  const name = hasHeader ? String(first).trim() : `${block.sheet} column ${columnLetters(col)}`;
   return { ok: true, pick: { sheet: block.sheet, col, headerRow: hasHeader ? block.top : undefined, firstRow, name, values } };
 }
 
@@ -78,6 +76,26 @@ export function foundPeriod(values: (number | null)[]): number {
   } catch {
     return 1;
   }
+}
+
+/**
+ * A warning when a history is too short for a trustworthy ledger, saying what is needed: a
+ * seasonal model of season p needs what the engine's model shape asks for (two full seasons and
+ * the periods to fit the constants); finding a season at all needs three full seasons (common
+ * practice for seasonal decomposition). Undefined when the history is long enough.
+ */
+export function shortHistoryWarning(p: HistoryPick, period: number): string | undefined {
+  const present = p.values.filter((v) => v !== null).length;
+  const seasonal = modelShape({ period: Math.max(period, 2), seasonality: "multiplicative", trend: "linear", start: "decomposition" });
+  const needed = requiredLength(seasonal, shapeConstants(seasonal).length);
+  if (period > 1 && present >= needed) return undefined;
+  if (period > 1) {
+    return `Only ${present} values: a seasonal ledger with season length ${period} needs at least ${needed} (two full seasons for the start, then enough periods to fit the constants). Select more history, or treat its forecasts with great care.`;
+  }
+  const monthly = modelShape({ period: 12, seasonality: "multiplicative", trend: "linear", start: "decomposition" });
+  const monthlyNeeded = requiredLength(monthly, shapeConstants(monthly).length);
+  if (present >= 3 * 12) return undefined;
+  return `Only ${present} values and no season found: finding a yearly season in monthly data needs at least 36 values (three full years), and a seasonal ledger at least ${monthlyNeeded}. Without a season the ledger smooths level and trend only and its constants may run to their limits. Select more history, or type the season length if you know it.`;
 }
 
 /** Short description for the panel: "Seed trays (units): 84 values in Sales!B2:B85, 1 blank". */

@@ -1,6 +1,6 @@
 /** "Use the selected cells" and "Use the selected cell": reading the selection into the form. */
 import { columnLetters } from "../../../ledger/describe/addresses";
-import { describePick, foundPeriod, pickHistories } from "../historyPick";
+import { describePick, foundPeriod, pickHistories, shortHistoryWarning } from "../historyPick";
 import type { ActionContext } from "./actionContext";
 
 /** One history per selected column; a single cell means its whole column. */
@@ -20,6 +20,14 @@ export async function chooseHistory(ctx: ActionContext): Promise<void> {
     ctx.say(result.message, "error");
     return;
   }
+  // A selection below row 1 without its header: the series is named by the column's heading.
+  if (block.top > 0) {
+    const headings = await port.read(block.sheet, 0, block.left, 1, block.values[0].length);
+    for (const pick of result.picks) {
+      const h = headings.values[0]?.[pick.col - block.left];
+      if (pick.headerRow === undefined && typeof h === "string" && h.trim() !== "" && !Number.isFinite(Number(h))) pick.name = h.trim();
+    }
+  }
   ctx.picks = result.picks;
   const first = result.picks[0];
   const found = foundPeriod(first.values);
@@ -30,6 +38,13 @@ export async function chooseHistory(ctx: ActionContext): Promise<void> {
     result.picks.length === 1
       ? `History: ${describePick(first)}.`
       : `${result.picks.length} histories, one ledger each on its own sheet: ${result.picks.map((p) => p.name).join("; ")}.`;
+  const period = ctx.periodTyped && Number(view.period.value) > 0 ? Number(view.period.value) : found;
+  const warning = result.picks.map((p) => shortHistoryWarning(p, period)).find((w) => w !== undefined);
+  if (warning) {
+    view.historySummary.textContent += ` ${warning}`;
+    ctx.say(warning, "error");
+    return;
+  }
   ctx.say(result.picks.length === 1 ? "History chosen. Check the settings, then write the ledger." : "Histories chosen. Each gets its own ledger sheet.");
 }
 
