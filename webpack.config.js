@@ -75,7 +75,7 @@ module.exports = async (env = {}, argv = {}) => {
         template: "./src/taskpane/taskpane.html",
         chunks: ["functions", "taskpane"],
       }),
-      new CopyWebpackPlugin({ patterns: [{ from: "assets/*.png", to: "assets/[name][ext]" }] }),
+      new CopyWebpackPlugin({ patterns: [{ from: "assets/{icon-*.png,help.html}", to: "assets/[name][ext]" }] }),
     ],
     performance: { hints: false },
     devServer: serving ? devServer(await httpsOptions(), env) : undefined,

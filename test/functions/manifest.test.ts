@@ -47,11 +47,53 @@ test("the functions' namespace is EBB and the button reads Ebb ledger", () => {
 test("every referenced resource is defined, and every URL is a file the dev server serves", () => {
   const referenced = new Set(all(/resid="([^"]+)"/g));
   for (const id of referenced) expect(resource(id)).toBeDefined();
-  const served = new Set(["functions.js", "functions.json", "taskpane.html", ...icons.SIZES.map((s) => `assets/icon-${s}.png`)]);
+  const served = new Set(["functions.js", "functions.json", "taskpane.html", "assets/help.html", ...icons.SIZES.map((s) => `assets/icon-${s}.png`)]);
   for (const url of all(/DefaultValue="(https?:[^"]+)"/g)) {
     expect(url.startsWith("https://localhost:3000/")).toBe(true);
     expect(served.has(url.slice("https://localhost:3000/".length))).toBe(true);
   }
+});
+
+test("store readiness: a support page, a real help page to learn more, and the ExcelApi 1.9 the panel needs", () => {
+  expect(/<SupportUrl DefaultValue="([^"]+)"\/>/.exec(xml)?.[1]).toBe("https://localhost:3000/assets/help.html");
+  const learnMore = /<LearnMoreUrl resid="([^"]+)"\/>/.exec(xml)?.[1];
+  expect(resource(learnMore!)).toBe("https://localhost:3000/assets/help.html");
+  expect(xml).toMatch(/<Set Name="ExcelApi" MinVersion="1\.9"\/>/);
+  const help = readFileSync(join(ROOT, "assets/help.html"), "utf8");
+  expect(help).toMatch(/<title>Ebb help<\/title>/);
+  expect(help).toMatch(/orders, stock or budgets/); // DESIGN's caution where forecasts feed orders
+});
+
+describe("npm run build:manifest", () => {
+  const script = join(ROOT, "manifest/production.js");
+  const out = join(ROOT, "test-artifacts/manifest-build/manifest.xml");
+  const run = (...args: string[]) => spawnSync(process.execPath, [script, ...args], { encoding: "utf8" });
+
+  test("writes the manifest for a production base URL, every address moved, still valid", () => {
+    const done = run("https://addins.example.com/ebb", "--out", out);
+    expect(done.status).toBe(0);
+    expect(done.stdout).toContain("https://addins.example.com/ebb/");
+    const built = readFileSync(out, "utf8");
+    expect(built).not.toContain("localhost");
+    const urls = Array.from(built.matchAll(/DefaultValue="(https?:[^"]+)"/g), (m) => m[1]);
+    expect(urls.length).toBe(all(/DefaultValue="(https?:[^"]+)"/g).length);
+    for (const url of urls) expect(url.startsWith("https://addins.example.com/ebb/")).toBe(true);
+    expect(built).toContain('DefaultValue="https://addins.example.com/ebb/functions.json"');
+    const info = spawnSync(process.execPath, [join(ROOT, "node_modules/office-addin-manifest/cli.js"), "info", out], { encoding: "utf8" });
+    expect(info.status).toBe(0);
+    expect(info.stdout).toContain("Name: Ebb");
+  });
+
+  test.each([
+    [[], /No base URL given/],
+    [["http://addins.example.com/ebb/"], /not an https address/],
+    [["addins example"], /is not a URL/],
+  ])("refuses %j with a message saying what to type", (args, message) => {
+    const done = run(...(args as string[]), "--out", out + ".refused");
+    expect(done.status).toBe(1);
+    expect(done.stderr).toMatch(message);
+    expect(done.stderr).toContain("for example https://");
+  });
 });
 
 describe.each([16, 32, 64, 80, 128])("assets/icon-%i.png", (size) => {
