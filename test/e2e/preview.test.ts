@@ -5,15 +5,13 @@
  * reproduces the engine, not the engine itself.
  */
 import AxeBuilder from "@axe-core/playwright";
-import { mkdirSync } from "fs";
 import { join } from "path";
 import type { Page } from "playwright-core";
 import { fitModel, forecastModel, modelStates, predictionInterval } from "../../src/engine";
-import { describeWithChromium, launchChromium, requireChromium, type Browser } from "./support/chromium";
+import { describeWithChromium } from "./support/chromium";
 import { demoColumns } from "./support/demoSeries";
-import { REPO, startPreviewServer, type PreviewServer } from "./support/previewServer";
+import { ARTIFACTS, previewSession } from "./support/session";
 
-const ARTIFACTS = join(REPO, "test-artifacts");
 const PERIOD = 12; // the demo formulas type the season length 12 (monthly data)
 const HORIZON = 12;
 
@@ -48,11 +46,6 @@ async function cellNumbers(page: Page, addresses: string[]): Promise<Record<stri
 
 const col = (c: number): string => String.fromCharCode(65 + c);
 
-async function openPreview(page: Page, url: string): Promise<void> {
-  await page.goto(url);
-  await page.waitForSelector("body[data-ready=true]");
-}
-
 async function panelMessage(page: Page): Promise<string> {
   await page.waitForFunction(() => !document.querySelector(".ebb-panel")!.hasAttribute("aria-busy"));
   return (await page.textContent("#ebb-message")) ?? "";
@@ -79,25 +72,11 @@ async function writeSeedTraysLedger(page: Page): Promise<LedgerLayoutSeen> {
 }
 
 describeWithChromium("preview workbook in Chromium", () => {
-  let server: PreviewServer | undefined;
-  let browser: Browser | undefined;
+  const session = previewSession();
   const columns = demoColumns();
 
-  beforeAll(async () => {
-    requireChromium();
-    mkdirSync(ARTIFACTS, { recursive: true });
-    server = await startPreviewServer();
-    browser = await launchChromium();
-  }, 300_000);
-
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-  });
-
   test("spilled EBB.AHEAD and EBB.BAND results in the grid equal the engine's", async () => {
-    const page = browser!.page;
-    await openPreview(page, server!.url);
+    const page = await session.open();
     // The demo puts EBB.AHEAD(B2:F200, 12, 12) at I5 (12 x 5) and EBB.BAND(..., 0.95) at I20 (12 x 10).
     const ahead: string[] = [];
     const band: string[] = [];
@@ -126,8 +105,7 @@ describeWithChromium("preview workbook in Chromium", () => {
   });
 
   test("a new actual typed under a sales column rolls the forecast to the engine's new values", async () => {
-    const page = browser!.page;
-    await openPreview(page, server!.url);
+    const page = await session.open();
     const cells = Array.from({ length: HORIZON }, (_, h) => `I${5 + h}`);
     const before = await cellNumbers(page, cells);
     // Keyboard: select B85 (December 2025), step down, type a January 2026 figure, Enter.
@@ -152,8 +130,7 @@ describeWithChromium("preview workbook in Chromium", () => {
   });
 
   test("an error shows its message on hover and in the formula bar's note", async () => {
-    const page = browser!.page;
-    await openPreview(page, server!.url);
+    const page = await session.open();
     await page.click('td[data-cell="T2"]');
     await page.keyboard.type("=EBB.AHEAD(B2:B10, 12, 3)");
     await page.keyboard.press("Enter");
@@ -172,8 +149,7 @@ describeWithChromium("preview workbook in Chromium", () => {
   });
 
   test("a ledger written from the panel recomputes when alpha changes in its settings cell", async () => {
-    const page = browser!.page;
-    await openPreview(page, server!.url);
+    const page = await session.open();
     const layout = await writeSeedTraysLedger(page);
     expect(await page.getAttribute(".sheet-tab[aria-selected=true]", "id")).toBeTruthy();
     const settingCells = [layout.settings.beta, layout.settings.gamma];
@@ -195,8 +171,7 @@ describeWithChromium("preview workbook in Chromium", () => {
   });
 
   test("a ledger formula overwritten by a number is reported by the check, and the report selects it", async () => {
-    const page = browser!.page;
-    await openPreview(page, server!.url);
+    const page = await session.open();
     const layout = await writeSeedTraysLedger(page);
     const row = layout.updates.rows.find((r) => !r.start && r.period === 40)!;
     const target = `${col(layout.updates.columns.level)}${row.row + 1}`;
@@ -213,8 +188,7 @@ describeWithChromium("preview workbook in Chromium", () => {
   });
 
   test("the panel and the grid have no serious or critical accessibility violations (axe-core)", async () => {
-    const page = browser!.page;
-    await openPreview(page, server!.url);
+    const page = await session.open();
     const serious = async (): Promise<string[]> => {
       const result = await new AxeBuilder({ page }).analyze();
       return result.violations
@@ -227,9 +201,9 @@ describeWithChromium("preview workbook in Chromium", () => {
   });
 
   test("screenshots of the workbook and of a ledger are saved", async () => {
-    const page = browser!.page;
-    await page.setViewportSize({ width: 1280, height: 760 }); // keeps the README's picture small
-    await openPreview(page, server!.url);
+    const page = session.page();
+    await page.setViewportSize({ width: 1280, height: 760 }); // keeps the screenshot small
+    await session.open();
     await page.click('td[data-cell="I5"]'); // a spilled forecast, its formula in the formula bar
     const workbook = join(ARTIFACTS, "preview-workbook.png");
     await page.screenshot({ path: workbook }); // tests write only here; `npm run picture` refreshes the README's

@@ -4,18 +4,10 @@
  * spreadsheets), and a spilled block blocked by a typed cell names that cell and comes back
  * as soon as the cell is cleared.
  */
-import { mkdirSync } from "fs";
 import { join } from "path";
 import type { Page } from "playwright-core";
-import { describeWithChromium, launchChromium, requireChromium, type Browser } from "./support/chromium";
-import { REPO, startPreviewServer, type PreviewServer } from "./support/previewServer";
-
-const ARTIFACTS = join(REPO, "test-artifacts");
-
-async function openPreview(page: Page, url: string): Promise<void> {
-  await page.goto(url);
-  await page.waitForSelector("body[data-ready=true]");
-}
+import { describeWithChromium } from "./support/chromium";
+import { ARTIFACTS, previewSession } from "./support/session";
 
 async function typeInto(page: Page, address: string, text: string): Promise<void> {
   await page.click(`td[data-cell="${address}"]`);
@@ -29,24 +21,10 @@ async function typeInto(page: Page, address: string, text: string): Promise<void
 const shown = (page: Page, address: string) => page.textContent(`td[data-cell="${address}"]`);
 
 describeWithChromium("the preview grid as a spreadsheet", () => {
-  let server: PreviewServer | undefined;
-  let browser: Browser | undefined;
-
-  beforeAll(async () => {
-    requireChromium();
-    mkdirSync(ARTIFACTS, { recursive: true });
-    server = await startPreviewServer();
-    browser = await launchChromium();
-  }, 300_000);
-
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-  });
+  const session = previewSession();
 
   test("header B, then shift-click header F: B1:F85 (the used rows of columns B to F)", async () => {
-    const page = browser!.page;
-    await openPreview(page, server!.url);
+    const page = await session.open();
     await page.click('th.col-head[data-col="1"]');
     await page.click('th.col-head[data-col="5"]', { modifiers: ["Shift"] });
     const selected = await page.$$eval('td[aria-selected="true"]', (tds) => (tds as HTMLElement[]).map((t) => t.dataset.cell!));
@@ -58,8 +36,7 @@ describeWithChromium("the preview grid as a spreadsheet", () => {
   });
 
   test('"Invented demo data" is said once on the first screen; the fitted SSE reads as a planner\'s number', async () => {
-    const page = browser!.page;
-    await openPreview(page, server!.url);
+    const page = await session.open();
     const text = await page.evaluate(() => document.body.innerText);
     expect(text.match(/invented demo data/gi)?.length).toBe(1);
     // EBB.FIT at I35 spills 9 rows per product; the 7th is the SSE (demo layout, FIT_LABELS).
@@ -74,8 +51,7 @@ describeWithChromium("the preview grid as a spreadsheet", () => {
   });
 
   test("interval headers wrap in full, so low can be told from high (I19, J19)", async () => {
-    const page = browser!.page;
-    await openPreview(page, server!.url);
+    const page = await session.open();
     for (const [address, end] of [["I19", ": low"], ["J19", ": high"], ["H4", "Months ahead"]]) {
       const seen = await page.$eval(`td[data-cell="${address}"]`, (td) => ({
         text: td.textContent ?? "",
@@ -88,8 +64,7 @@ describeWithChromium("the preview grid as a spreadsheet", () => {
   });
 
   test("a short selection (B2:B15) is warned with what is needed, and its ledger sheet is named after the series", async () => {
-    const page = browser!.page;
-    await openPreview(page, server!.url);
+    const page = await session.open();
     await page.click('td[data-cell="B2"]');
     await page.click('td[data-cell="B15"]', { modifiers: ["Shift"] });
     await page.click("#ebb-pick");
@@ -104,8 +79,7 @@ describeWithChromium("the preview grid as a spreadsheet", () => {
   });
 
   test("J6 typed inside the I5 block: #SPILL! names J6; clearing J6 brings the block back", async () => {
-    const page = browser!.page;
-    await openPreview(page, server!.url);
+    const page = await session.open();
     const before = await page.getAttribute('td[data-cell="I5"]', "data-value");
     expect(Number(before)).toBeGreaterThan(0);
     await typeInto(page, "J6", "5");
