@@ -1,0 +1,20 @@
+import { HyperFormula } from "hyperformula";
+import { describeLedger, writeLedgerToHyperFormula, type LedgerDescription, type LedgerInput } from "../../../src/ledger";
+
+export const HISTORY_SHEET = "History";
+
+/**
+ * A ledger written into a fresh HyperFormula workbook next to its history: the history on a
+ * sheet of its own (header in B1, values from B2), the ledger's actuals referring to it.
+ */
+export function sourcedLedger(input: Omit<LedgerInput, "source">): { hf: HyperFormula; desc: LedgerDescription; historySheet: number; ledgerSheet: number; input: LedgerInput } {
+  const hf = HyperFormula.buildEmpty({ licenseKey: "gpl-v3" });
+  hf.addSheet(HISTORY_SHEET);
+  const historySheet = hf.getSheetId(HISTORY_SHEET)!;
+  const values = Array.from(input.history, (v) => [v ?? null]);
+  hf.setCellContents({ sheet: historySheet, row: 0, col: 1 }, [[input.name ?? "Series"], ...values]);
+  const full: LedgerInput = { ...input, source: { sheet: HISTORY_SHEET, col: 1, firstRow: 1 } };
+  const desc = describeLedger(full);
+  const ledgerSheet = writeLedgerToHyperFormula(hf, desc);
+  return { hf, desc, historySheet, ledgerSheet, input: full };
+}
