@@ -77,6 +77,7 @@ export function engineFigures(history: ArrayLike<number | null | undefined>, set
     gamma: settings.gamma,
     phi: settings.phi,
   });
+  refuseUnwrittenStart(model.start.detail);
   const { seasonal, period: p, startWindow: window } = model.shape;
   const firstUpdate = model.start.firstUpdate;
   const states = modelStates(model);
@@ -107,4 +108,25 @@ export function engineFigures(history: ArrayLike<number | null | undefined>, set
     scale: dataScale(y),
     score: { mad: mad(actual, fc), rmse: rmse(actual, fc), mape: mapeValue, bias: bias(actual, fc), count: model.errorCount },
   };
+}
+
+/**
+ * The engine may skip leading blanks and fill blanks inside the start window (seasonally
+ * adjusted interpolation); the ledger's start formulas read the first rows as they stand, so it
+ * refuses such a history with what to do rather than write a start no formula can redo.
+ */
+function refuseUnwrittenStart(detail: { skipped?: number; filled?: { at: number[]; values: number[] } } | undefined): void {
+  if (detail?.skipped) {
+    throw badInput(
+      "ledger-leading-blanks",
+      `The history begins with ${detail.skipped} blank period${detail.skipped === 1 ? "" : "s"}. A ledger writes its start from the first rows: select the history from its first actual (period ${detail.skipped + 1}).`,
+    );
+  }
+  if (detail?.filled && detail.filled.at.length > 0) {
+    const where = detail.filled.at.map((t, i) => `period ${t + 1} (the engine would use ${detail.filled!.values[i].toFixed(2)})`).join(", ");
+    throw badInput(
+      "ledger-start-blanks",
+      `The start window has blanks: ${where}. A ledger writes its start as formulas over complete values: type the missing actuals (or the engine's fill shown) into the history, then write the ledger.`,
+    );
+  }
 }
