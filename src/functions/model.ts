@@ -19,8 +19,7 @@ export function fitFn(history: unknown, period: unknown, seasonality: unknown, t
   const options = modelOptionsArg({ period, seasonality, trend, start });
   return eachSeries(readSeries(history, "history"), 1, (s) => {
     const m = fit(s, options);
-    const seasonal = m.spec.seasonality !== "none";
-    const trended = m.spec.trend !== "none";
+    const { seasonal, hasTrend: trended } = m.shape;
     return column([
       m.spec.seasonality,
       m.spec.trend,

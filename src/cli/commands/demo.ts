@@ -48,12 +48,12 @@ export function runDemo(settings: RunSettings): number {
 }
 
 function describe(m: FittedModel): string {
-  const { spec, constants: c } = m;
+  const { spec, shape, constants: c } = m;
   const parts = [`season length ${spec.period}`, `${spec.seasonality === "none" ? "no" : spec.seasonality} seasonality`, `${spec.trend === "none" ? "no" : spec.trend} trend`];
   const constants = [`alpha ${c.alpha.toFixed(3)}`];
-  if (spec.trend !== "none") constants.push(`beta ${c.beta.toFixed(3)}`);
-  if (spec.seasonality !== "none") constants.push(`gamma ${c.gamma.toFixed(3)}`);
-  if (spec.trend === "damped") constants.push(`phi ${c.phi.toFixed(3)}`);
+  if (shape.hasTrend) constants.push(`beta ${c.beta.toFixed(3)}`);
+  if (shape.seasonal) constants.push(`gamma ${c.gamma.toFixed(3)}`);
+  if (shape.damped) constants.push(`phi ${c.phi.toFixed(3)}`);
   return `${parts.join(", ")}; ${constants.join(", ")}; one-step RMSE ${m.rmse.toFixed(1)}`;
 }
 
