@@ -88,10 +88,7 @@ export async function writeLedgerToExcel(desc: LedgerDescription, options: HostW
     }
 
     // The writes, in batches of rows that each stay under the request budget.
-    const suspend = () => {
-      context.application.suspendApiCalculationUntilNextSync();
-      context.application.suspendScreenUpdatingUntilNextSync();
-    };
+    const suspend = () => suspendUntilSync(context);
     suspend();
     if (!sheetExists) sheet = workbook.worksheets.add(desc.sheet);
     if (options.confirmed) {
@@ -148,10 +145,7 @@ export async function writeExtensionToExcel(ext: LedgerExtension, onProgress?: (
       return item;
     });
     await sync();
-    const suspend = () => {
-      context.application.suspendApiCalculationUntilNextSync();
-      context.application.suspendScreenUpdatingUntilNextSync();
-    };
+    const suspend = () => suspendUntilSync(context);
     suspend();
     wanted.forEach((n, i) => {
       const missing = found[i].isNullObject;
@@ -323,3 +317,9 @@ function addChart(sheet: Excel.Worksheet, spec: ChartSpec): void {
   chart.setPosition(spec.from, spec.to);
 }
 
+
+/** Calculation and screen updating wait until the next sync: each batch of writes lands at once. */
+function suspendUntilSync(context: Excel.RequestContext): void {
+  context.application.suspendApiCalculationUntilNextSync();
+  context.application.suspendScreenUpdatingUntilNextSync();
+}
