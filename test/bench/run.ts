@@ -6,6 +6,7 @@
  *   npm run bench -- --quick           ~60 monthly + 40 quarterly series, under a minute (CI)
  *   npm run bench -- --references      also runs base R HoltWinters and statsmodels
  *   npm run bench -- --out FILE        write the markdown to FILE instead
+ *   npm run bench -- --only a,b        only the named sections (core, order, batch, ...)
  *
  * The table goes to standard output, progress to standard error.
  */
@@ -14,30 +15,31 @@ import { loadavg } from "os";
 import { join } from "path";
 import { CLASSIC, runAccuracy } from "./accuracy";
 import { measureAhead } from "./ahead";
-import { batchBenchmark, renderBatchSection } from "./batch";
 import { describeCode, describeMachine } from "./machine";
 import { evenSample, loadM3 } from "./m3";
-import { renderOrder, runOrderBench } from "./order";
 import { Progress } from "./progress";
 import { compareSse, scoreForecastPackage, scoreReference } from "./referenceScoring";
 import { runForecastPackage, runReferences } from "./references";
 import { renderReport } from "./report";
 import type { BenchResult } from "./result";
 import { CoverageTally, Scoreboard } from "./scoring";
+import { CORE, SECTIONS, type SectionContext } from "./sections";
 import { measureThroughput } from "./throughput";
 import { MemoryWatch, now } from "./timing";
 import { measureWorkbook } from "./workbook";
 
-const USAGE = `Usage: npm run bench -- [--quick] [--references] [--out FILE]
+const USAGE = `Usage: npm run bench -- [--quick] [--references] [--out FILE] [--only NAMES]
   --quick        a small sample (60 monthly + 40 quarterly series), under a minute; writes no file unless --out
   --references   also run base R stats::HoltWinters (/usr/bin/Rscript), statsmodels (/usr/bin/python3) and
                  R's forecast package (ets, thetaf; ~20 min on M3, cached under test/bench/references/cache)
-  --out FILE     where to write the markdown (default test/bench/RESULTS.md for a full run)`;
+  --out FILE     where to write the markdown (default test/bench/RESULTS.md for a full run of every section)
+  --only NAMES   comma-separated sections to run: ${[CORE, ...SECTIONS.map((s) => s.name)].join(", ")}; writes no file unless --out`;
 
 interface Args {
   quick: boolean;
   references: boolean;
   out?: string;
+  only?: Set<string>;
 }
 
 function parseArgs(argv: string[]): Args {
@@ -47,6 +49,7 @@ function parseArgs(argv: string[]): Args {
     if (a === "--quick") args.quick = true;
     else if (a === "--references") args.references = true;
     else if (a === "--out" && i + 1 < argv.length) args.out = argv[++i];
+    else if (a === "--only" && i + 1 < argv.length) args.only = new Set(argv[++i].split(",").map((w) => w.trim()));
     else if (a === "--help" || a === "-h") {
       console.log(USAGE);
       process.exit(0);
@@ -55,20 +58,54 @@ function parseArgs(argv: string[]): Args {
       process.exit(2);
     }
   }
-  if (!args.quick && !args.out) args.out = join(__dirname, "RESULTS.md");
+  const known = new Set([CORE, ...SECTIONS.map((s) => s.name)]);
+  for (const name of args.only ?? []) {
+    if (!known.has(name)) {
+      console.error(`Unknown section "${name}" after --only; the sections are ${[...known].join(", ")}.`);
+      process.exit(2);
+    }
+  }
+  if (!args.quick && !args.only && !args.out) args.out = join(__dirname, "RESULTS.md");
   return args;
 }
 
 async function main(): Promise<void> {
   const args = parseArgs(process.argv.slice(2));
-  const started = now();
-  const loadAtStart = loadavg()[0];
   const progress = new Progress();
-  const memory = new MemoryWatch();
   const allMonthly = loadM3("monthly");
   const allQuarterly = loadM3("quarterly");
-  const monthly = args.quick ? evenSample(allMonthly, 60) : allMonthly;
-  const quarterly = args.quick ? evenSample(allQuarterly, 40) : allQuarterly;
+  const ctx: SectionContext = {
+    quick: args.quick,
+    references: args.references,
+    monthly: args.quick ? evenSample(allMonthly, 60) : allMonthly,
+    quarterly: args.quick ? evenSample(allQuarterly, 40) : allQuarterly,
+    allMonthly,
+    allQuarterly,
+    progress,
+  };
+  const wanted = (name: string) => !args.only || args.only.has(name);
+  const parts: string[] = [];
+  if (wanted(CORE)) parts.push(await runCore(args, ctx));
+  // Sections marked last start child processes, so they run after every in-process timing.
+  for (const section of [...SECTIONS.filter((s) => !s.last), ...SECTIONS.filter((s) => s.last)]) {
+    if (!wanted(section.name)) continue;
+    progress.note(`section: ${section.name}`);
+    parts.push(await section.run(ctx));
+  }
+  const report = parts.join("\n\n") + "\n";
+  process.stdout.write(report);
+  if (args.out) {
+    writeFileSync(args.out, report);
+    progress.note(`wrote ${args.out}`);
+  }
+}
+
+/** Throughput, fit speed, the functions layer, the workbook, accuracy and coverage, with references. */
+async function runCore(args: Args, ctx: SectionContext): Promise<string> {
+  const started = now();
+  const loadAtStart = loadavg()[0];
+  const { progress, allMonthly, monthly, quarterly } = ctx;
+  const memory = new MemoryWatch();
   const series = [...monthly, ...quarterly];
 
   progress.note(`throughput: engine vs bare loops (${monthly.length} monthly series)`);
@@ -78,9 +115,6 @@ async function main(): Promise<void> {
   const board = new Scoreboard();
   const coverage = new CoverageTally();
   const accuracy = runAccuracy(series, board, coverage, progress, memory);
-
-  const order = runOrderBench(monthly, args.quick, progress);
-  memory.sample();
 
   progress.note("functions layer: one AHEAD call over 1000 series x 120 periods");
   const ahead = await measureAhead(allMonthly);
@@ -131,14 +165,7 @@ async function main(): Promise<void> {
   result.peakHeapBytes = memory.peakHeap;
   result.elapsedSeconds = now() - started;
   result.loadAverage = [loadAtStart, loadavg()[0]];
-  // The batch command runs last, in child processes of its own, so it does not disturb the timings above.
-  const batch = renderBatchSection(await batchBenchmark(args.quick, progress));
-  const report = renderReport(result) + "\n" + renderOrder(order) + "\n\n" + batch + "\n";
-  process.stdout.write(report);
-  if (args.out) {
-    writeFileSync(args.out, report);
-    progress.note(`wrote ${args.out}`);
-  }
+  return renderReport(result).trimEnd();
 }
 
 main().catch((e) => {
