@@ -4,6 +4,7 @@
  * touches this table and the section's own file only. `npm run bench -- --only NAME` runs one.
  */
 import { batchBenchmark, renderBatchSection } from "./batch";
+import { renderLedgerBench, runLedgerBench } from "./ledger";
 import type { M3Series } from "./m3";
 import { renderOrder, runOrderBench } from "./order";
 import type { Progress } from "./progress";
@@ -30,6 +31,7 @@ export interface BenchSection {
 
 export const SECTIONS: BenchSection[] = [
   { name: "order", run: (c) => renderOrder(runOrderBench(c.monthly, c.quick, c.progress)) },
+  { name: "ledger", run: async (c) => renderLedgerBench(await runLedgerBench(c.quick, c.progress)) },
   { name: "batch", last: true, run: async (c) => renderBatchSection(await batchBenchmark(c.quick, c.progress)) },
 ];
 
