@@ -9,6 +9,7 @@ import {
   countPresent,
   decompositionStart,
   EbbError,
+  isSeasonal,
   requirePositive,
   resolvePeriod,
 } from "../engine";
@@ -25,10 +26,10 @@ function historyOf(s: SeriesInput): Float64Array {
   return y;
 }
 
-/** The season length to use: the typed one, or the detected one (which must be 2 or more here). */
-function seasonLength(y: Float64Array, typed: number, label: string): number {
+/** The season length to use: the typed one, or the detected one (the engine must call it seasonal). */
+function seasonLength(y: Float64Array, typed: number, label: string, kind: "multiplicative" | "additive"): number {
   const p = resolvePeriod(y, typed);
-  if (p >= 2) return p;
+  if (isSeasonal(kind, p)) return p;
   if (typed === 0) {
     throw badInput(
       "no-season-found",
@@ -49,7 +50,7 @@ export function indicesFn(history: unknown, period: unknown, seasonality: unknow
   const kind = fixedSeasonalityArg(seasonality);
   return eachSeries(readSeries(history, "history"), 1, (s) => {
     const y = historyOf(s);
-    const p = seasonLength(y, typed, s.label);
+    const p = seasonLength(y, typed, s.label, kind);
     const full = y.subarray(0, Math.floor(y.length / p) * p);
     if (kind === "multiplicative") requirePositive(full);
     const indices = classicalIndices(full.length >= 2 * p ? full : y, p, kind).normal;
@@ -64,7 +65,7 @@ export function initFn(history: unknown, period: unknown, seasonality: unknown, 
   const seasons = optionalNumberArg(cycles, "cycles") ?? 2;
   return eachSeries(readSeries(history, "history"), 1, (s) => {
     const y = historyOf(s);
-    const p = seasonLength(y, typed, s.label);
+    const p = seasonLength(y, typed, s.label, kind);
     if (kind === "multiplicative") requirePositive(y.subarray(0, Math.min(y.length, seasons * p)));
     const start = decompositionStart(y, p, kind, "linear", seasons);
     const { level, trend, indices } = start.state;
