@@ -28,8 +28,11 @@ export const parseTrend = (v: unknown, fallback: TrendChoice = "linear"): TrendC
 export const parseStart = (v: unknown, fallback: StartMethod = "decomposition"): StartMethod =>
   pick("start", START_WORDS, v, fallback);
 
+/** Range of a typed smoothing constant (alpha, beta, gamma, phi), ends included. */
+export const CONSTANT_BOUNDS = { low: 0, high: 1 } as const;
+
 /** A smoothing constant typed by the user: must lie in [lo, hi]. */
-export function checkConstant(name: string, v: number | undefined, lo = 0, hi = 1): number | undefined {
+export function checkConstant(name: string, v: number | undefined, lo: number = CONSTANT_BOUNDS.low, hi: number = CONSTANT_BOUNDS.high): number | undefined {
   if (v === undefined || v === null) return undefined;
   if (typeof v !== "number" || !Number.isFinite(v) || v < lo || v > hi) {
     throw badInput("bad-constant", `${name} must be a number from ${lo} to ${hi}; got ${String(v)}. Leave it blank to fit it.`);
@@ -49,6 +52,9 @@ export function checkPeriod(v: number | undefined): number {
 /** The two ways coverage is written, for messages: say which form a field expects. */
 export const COVERAGE_FORMS = "a fraction between 0 and 1 (such as 0.95) or a percentage between 1 and 100 (such as 95)";
 
+/** The two open ranges coverage may be typed in: a fraction, or a percentage. */
+export const COVERAGE_RANGES = { fraction: { low: 0, high: 1 }, percent: { low: 1, high: 100 } } as const;
+
 /**
  * Interval coverage as typed anywhere (batch command, worksheet functions, panel, ledger):
  * a fraction such as 0.95, or a percentage such as 95 (a number above 1 and below 100 is read
@@ -56,8 +62,8 @@ export const COVERAGE_FORMS = "a fraction between 0 and 1 (such as 0.95) or a pe
  */
 export function parseCoverage(v: number): number {
   if (typeof v === "number" && Number.isFinite(v)) {
-    if (v > 0 && v < 1) return v;
-    if (v > 1 && v < 100) return v / 100;
+    if (v > COVERAGE_RANGES.fraction.low && v < COVERAGE_RANGES.fraction.high) return v;
+    if (v > COVERAGE_RANGES.percent.low && v < COVERAGE_RANGES.percent.high) return v / 100;
   }
   throw badInput("bad-coverage", `Coverage must be ${COVERAGE_FORMS}; got ${String(v)}.`);
 }

@@ -3,6 +3,7 @@ import { abs, nm, type SectionContext } from "./context";
 import { SECTION, SETTING_ROWS, SETTINGS_HEADER, SETTINGS_NOTES, UNUSED } from "./labels";
 import { SETTING_KEYS } from "./layout";
 import { shownCycles } from "./engineFigures";
+import { settingGuardFormula } from "./settingsGuard";
 import { FORMAT } from "./sheet";
 import type { CellKind, CellValue, SettingKey, StyleRole } from "./types";
 
@@ -45,9 +46,12 @@ export function settingsSection(ctx: SectionContext): { inUse: Record<SettingKey
     const role: StyleRole = v.kind === "setting" ? "input" : "label";
     cells.put(row, c0 + 1, v.kind, role, v.value, v.format ? { format: v.format } : {});
     cells.put(row, c0 + 2, "constant", "written", v.value, v.format ? { format: v.format } : {});
-    cells.text(row, c0 + 3, v.explain ?? text.explain, "explain");
     inUse[key] = cellAddress(row, c0 + 1);
     written[key] = cellAddress(row, c0 + 2);
+    const explain = v.explain ?? text.explain;
+    const guard = settingGuardFormula(key, v.kind === "setting", inUse[key], written[key], explain);
+    if (guard) cells.formula(row, c0 + 3, guard, explain, "General", "explain");
+    else cells.text(row, c0 + 3, explain, "explain");
     ctx.names.push({ name: nm(ctx, key), refersTo: sheetReference(ctx.sheet, abs(row, c0 + 1)), comment: `Ebb ledger setting: ${text.label}` });
   }
   return { inUse, written };
