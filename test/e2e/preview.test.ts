@@ -8,6 +8,7 @@ import AxeBuilder from "@axe-core/playwright";
 import { join } from "path";
 import type { Page } from "playwright-core";
 import { fitModel, forecastModel, modelStates, predictionInterval } from "../../src/engine";
+import { GUARD_TEXT } from "../../src/ledger/describe/settingsGuard";
 import { describeWithChromium } from "./support/chromium";
 import { demoColumns } from "./support/demoSeries";
 import { ARTIFACTS, previewSession } from "./support/session";
@@ -168,6 +169,22 @@ describeWithChromium("preview workbook in Chromium", () => {
     outlook.forEach((a, h) => expectClose(shown[a], forecast[h], `ledger outlook ${h + 1} ahead at alpha 0.3`));
     const states = modelStates(model);
     expectClose(shown[levelCell], states.level[states.level.length - 1], "ledger level of the last period at alpha 0.3");
+  });
+
+  test("a setting typed out of range, or a word typed over a fixed setting, is flagged beside it at once", async () => {
+    const page = await session.open();
+    const layout = await writeSeedTraysLedger(page);
+    const beside = (address: string) => `${String.fromCharCode(address.charCodeAt(0) + 2)}${address.slice(1)}`; // the explanation column
+    for (const [setting, typed] of [["alpha", "1.5"], ["seasonality", "additive"]] as const) {
+      await page.click(`td[data-cell="${layout.settings[setting]}"]`);
+      await page.keyboard.type(typed);
+      await page.keyboard.press("Enter");
+    }
+    // Expected texts: the guard's own words (src/ledger/describe/settingsGuard.ts); the ledger was written multiplicative.
+    expect(await page.textContent(`td[data-cell="${beside(layout.settings.alpha)}"]`)).toBe(GUARD_TEXT.constant);
+    expect(await page.textContent(`td[data-cell="${beside(layout.settings.seasonality)}"]`)).toBe(`${GUARD_TEXT.fixedHead}multiplicative${GUARD_TEXT.fixedTail}`);
+    await page.setViewportSize({ width: 1280, height: 760 });
+    await page.screenshot({ path: join(ARTIFACTS, "preview-ledger-guard.png") });
   });
 
   test("a ledger formula overwritten by a number is reported by the check, and the report selects it", async () => {

@@ -7,17 +7,16 @@
  * every host and LibreOffice compute.
  */
 import { CONSTANT_BOUNDS, COVERAGE_RANGES } from "../../engine";
+import { CONSTANT_SETTINGS } from "./layout";
 import type { SettingKey } from "./types";
 
-/** Settings the planner may change, and the rule each must keep. */
-const CONSTANTS = new Set<SettingKey>(["alpha", "beta", "gamma", "phi"]);
-
 export const GUARD_TEXT = {
-  constant: `Out of range: type a number from ${CONSTANT_BOUNDS.low} to ${CONSTANT_BOUNDS.high}. Every formula below uses this cell.`,
-  coverage: "Out of range: type a fraction such as 0.95 or a percentage such as 95. The low and high columns use this cell.",
-  /** Followed by the value when written, then FIXED_TAIL. */
-  fixedHead: "Changed: the layout was built for ",
-  fixedTail: ". Type that back, or write a new ledger.",
+  // Short enough to read in the explanation column without widening it.
+  constant: `Out of range: type a number from ${CONSTANT_BOUNDS.low} to ${CONSTANT_BOUNDS.high}.`,
+  coverage: "Out of range: type a fraction (0.95) or a percent (95).",
+  /** Followed by the value when written, then fixedTail. */
+  fixedHead: "Changed: the layout is built for ",
+  fixedTail: ". Type that back.",
 } as const;
 
 /** A text constant inside a formula (quotes doubled). */
@@ -33,7 +32,7 @@ function literal(text: string): string {
 export function settingGuardFormula(key: SettingKey, editable: boolean, inUse: string, written: string, explain: string): string | undefined {
   if (key === "name") return undefined;
   const ok = literal(explain);
-  if (editable && CONSTANTS.has(key)) {
+  if (editable && CONSTANT_SETTINGS.includes(key)) {
     return `=IF(AND(ISNUMBER(${inUse}),${inUse}>=${CONSTANT_BOUNDS.low},${inUse}<=${CONSTANT_BOUNDS.high}),${ok},${literal(GUARD_TEXT.constant)})`;
   }
   if (editable && key === "coverage") {
