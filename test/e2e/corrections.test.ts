@@ -4,37 +4,20 @@
  * stock as the page shows them. Expected numbers: Ebb's engine run here on the committed demo CSV
  * with the sheet's corrections applied. A screenshot goes to test-artifacts/.
  */
-import { mkdirSync } from "fs";
 import { join } from "path";
 import { applyCorrections, fitModel, forecastModel, stockBuffer } from "../../src/engine";
 import { DEMO_EVENTS, demoMonths } from "../../src/preview/demo/generate-demo";
 import { CORRECTIONS_SHEET, DEMO_CORRECTIONS, DEMO_LEAD_TIME, DEMO_SERVICE_LEVEL } from "../../src/preview/workbook/correctionsSheet";
-import { describeWithChromium, launchChromium, requireChromium, type Browser } from "./support/chromium";
+import { describeWithChromium } from "./support/chromium";
 import { demoColumns } from "./support/demoSeries";
-import { REPO, startPreviewServer, type PreviewServer } from "./support/previewServer";
-
-const ARTIFACTS = join(REPO, "test-artifacts");
+import { ARTIFACTS, previewSession } from "./support/session";
 
 describeWithChromium("preview Corrections sheet in Chromium", () => {
-  let browser: Browser | undefined;
-  let server: PreviewServer | undefined;
-
-  beforeAll(async () => {
-    requireChromium();
-    server = await startPreviewServer();
-    browser = await launchChromium();
-  }, 300000);
-
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-  });
+  const session = previewSession();
 
   test("flags, corrections, reasons and the corrected figures are the engine's", async () => {
-    const page = browser!.page;
-    await page.setViewportSize({ width: 1400, height: 800 });
-    await page.goto(server!.url);
-    await page.waitForSelector("body[data-ready=true]");
+    await session.page().setViewportSize({ width: 1400, height: 800 });
+    const page = await session.open();
     await page.click(`button.sheet-tab:has-text("${CORRECTIONS_SHEET}")`);
     await page.waitForSelector('td[data-cell="K4"]');
     const cell = (a: string) => page.$eval(`td[data-cell="${a}"]`, (td) => ({ text: td.textContent ?? "", value: (td as HTMLElement).dataset.value ?? null }));
@@ -56,7 +39,6 @@ describeWithChromium("preview Corrections sheet in Chromium", () => {
 
     const row = months.indexOf(DEMO_EVENTS[1].month) + 2;
     await page.click(`td[data-cell="C${row}"]`);
-    mkdirSync(ARTIFACTS, { recursive: true });
     await page.screenshot({ path: join(ARTIFACTS, "preview-corrections.png") });
   });
 });
