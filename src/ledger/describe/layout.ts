@@ -30,6 +30,9 @@ export const SETTING_KEYS: SettingKey[] = [
   "tag",
 ];
 
+/** The settings rows that hold a smoothing constant (the engine's CONSTANT_BOUNDS apply). */
+export const CONSTANT_SETTINGS: readonly SettingKey[] = ["alpha", "beta", "gamma", "phi"];
+
 /** What the layout depends on: the engine's model shape, the outlook's length and the table's rows. */
 export interface LayoutShape {
   model: ModelShape;

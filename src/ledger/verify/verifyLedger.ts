@@ -1,7 +1,8 @@
 import { checkConstant, COVERAGE_FORMS, EbbError, parseCoverage } from "../../engine";
 import { cellAddress } from "../describe/addresses";
 import { describeLedger } from "../describe/describeLedger";
-import type { LedgerAnchor, LedgerCell, LedgerDescription, SettingKey } from "../describe/types";
+import { CONSTANT_SETTINGS } from "../describe/layout";
+import type { LedgerAnchor, LedgerCell, LedgerDescription } from "../describe/types";
 import { normaliseFormula, sameComputed, sameConstant } from "./compare";
 import { LEDGER_WORDS, readLedger } from "./readLedger";
 import type { LedgerReader, ReadCell } from "./reader";
@@ -52,7 +53,6 @@ export interface VerifyReport {
   expected?: LedgerDescription;
 }
 
-const CONSTANTS: SettingKey[] = ["alpha", "beta", "gamma", "phi"];
 
 /**
  * Verify a ledger: rebuild it from the history it was written from (the "Actual when
@@ -75,7 +75,7 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
   }
   const { input, inUse, written, settingCells } = ledger;
   // Settings the user may change: numbers the engine accepts, else recompute with the written value.
-  for (const k of [...CONSTANTS, "coverage" as const]) {
+  for (const k of [...CONSTANT_SETTINGS, "coverage" as const]) {
     const v = inUse[k];
     let complaint: string | undefined;
     try {
