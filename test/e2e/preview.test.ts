@@ -183,6 +183,11 @@ describeWithChromium("preview workbook in Chromium", () => {
     // Expected texts: the guard's own words (src/ledger/describe/settingsGuard.ts); the ledger was written multiplicative.
     expect(await page.textContent(`td[data-cell="${beside(layout.settings.alpha)}"]`)).toBe(GUARD_TEXT.constant);
     expect(await page.textContent(`td[data-cell="${beside(layout.settings.seasonality)}"]`)).toBe(`${GUARD_TEXT.fixedHead}multiplicative${GUARD_TEXT.fixedTail}`);
+    // The warnings are shaded like every other flag; the untouched explanations beside them are not.
+    const flagged = async (address: string) => (await page.getAttribute(`td[data-cell="${beside(address)}"]`, "class"))?.split(" ").includes("flagged");
+    expect(await flagged(layout.settings.alpha)).toBe(true);
+    expect(await flagged(layout.settings.seasonality)).toBe(true);
+    expect(await flagged(layout.settings.gamma)).toBe(false);
     await page.setViewportSize({ width: 1280, height: 760 });
     await page.screenshot({ path: join(ARTIFACTS, "preview-ledger-guard.png") });
   });

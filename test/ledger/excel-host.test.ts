@@ -66,6 +66,12 @@ describe("Excel host adapter", () => {
     const flagRange = desc.flags[0].range;
     const cf = fake.ranges.get(flagRange)!.conditionalFormat as { cellValue: { rule: { operator: string; formula1: string; formula2: string } } };
     expect(cf.cellValue.rule).toEqual({ formula1: "=-4", formula2: "=4", operator: "NotBetween" });
+    // The settings guard's warnings: a text rule on the explanation column (one per warning phrase).
+    const textFlags = desc.flags.filter((f) => "containsText" in f);
+    expect(textFlags.length).toBeGreaterThan(0);
+    for (const flag of textFlags) {
+      expect(fake.calls.some((c) => c.what === "conditionalFormats.add" && c.args[0] === flag.range && c.args[1] === "ContainsText")).toBe(true);
+    }
     expect(fake.calls.filter((c) => c.what === "charts.add")).toHaveLength(1);
     expect(fake.calls.find((c) => c.what === "chart.setPosition")!.args).toEqual([desc.chart.from, desc.chart.to]);
     // Fills were set for the inputs.

@@ -39,8 +39,12 @@ describe("xlsx adapter", () => {
     expect(String(chartHead.value)).toMatch(/Chart data/);
     expect(JSON.stringify(chartHead.note)).toContain("cannot draw charts");
     expect(CHART_BLOCK_NOTE).toMatch(/exceljs/);
-    const cf = (ws as unknown as { conditionalFormattings: { ref: string; rules: { operator: string }[] }[] }).conditionalFormattings;
-    expect(cf.map((c) => [c.ref, c.rules[0].operator])).toEqual([[desc.flags[0].range, "notBetween"]]);
+    const cf = (ws as unknown as { conditionalFormattings: { ref: string; rules: { type: string; operator?: string; formulae: string[] }[] }[] }).conditionalFormattings;
+    // The tracking-signal limits, then the settings guard's warning phrases, read back from the file.
+    expect(cf.map((c) => [c.ref, c.rules[0].type, c.rules[0].operator ?? c.rules[0].formulae[0]])).toEqual(
+      desc.flags.map((f) => ("outside" in f ? [f.range, "cellIs", "notBetween"] : [f.range, "expression", `NOT(ISERROR(SEARCH("${f.containsText}",${f.range.split(":")[0]})))`])),
+    );
+    expect(desc.flags.filter((f) => "containsText" in f).length).toBeGreaterThan(0);
   });
 
   it("refuses to write over a sheet that already holds something there", () => {

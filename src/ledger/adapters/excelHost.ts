@@ -1,7 +1,7 @@
 /// <reference types="office-js" />
 import { cellAddress, MAX_COLS, MAX_ROWS, parseCell, rangeAddress, sheetReference } from "../describe/addresses";
 import { FLAG_STYLE, ROLE_STYLES, roleRectangles } from "../describe/styles";
-import type { ChartSpec, LedgerCell, LedgerDescription } from "../describe/types";
+import type { ChartSpec, ConditionalFlag, LedgerCell, LedgerDescription } from "../describe/types";
 import type { LedgerExtension } from "../extend";
 import { gridReader, type LedgerReader } from "../verify/reader";
 
@@ -110,12 +110,7 @@ export async function writeLedgerToExcel(desc: LedgerDescription, options: HostW
     for (const [row, height] of Object.entries(desc.rowHeights)) sheet.getRange(`${Number(row) + 1}:${Number(row) + 1}`).format.rowHeight = height;
     const noteMode = options.notes ?? detectNoteApi();
     addNotes(workbook, sheet, desc.sheet, desc.cells, noteMode);
-    for (const flag of desc.flags) {
-      const cf = sheet.getRange(flag.range).conditionalFormats.add("CellValue" as Excel.ConditionalFormatType);
-      cf.cellValue.format.fill.color = FLAG_STYLE.fill;
-      cf.cellValue.format.font.color = FLAG_STYLE.color;
-      cf.cellValue.rule = { formula1: `=${flag.outside.low}`, formula2: `=${flag.outside.high}`, operator: "NotBetween" };
-    }
+    for (const flag of desc.flags) addFlag(sheet, flag);
     addChart(sheet, desc.chart);
     await sync();
     return { status: "written", sheet: desc.sheet, range: desc.footprint[0], syncs, notes: noteMode };
@@ -322,4 +317,20 @@ function addChart(sheet: Excel.Worksheet, spec: ChartSpec): void {
 function suspendUntilSync(context: Excel.RequestContext): void {
   context.application.suspendApiCalculationUntilNextSync();
   context.application.suspendScreenUpdatingUntilNextSync();
+}
+
+/** One flag as the host's conditional format: numbers outside limits, or text holding a phrase. */
+function addFlag(sheet: Excel.Worksheet, flag: ConditionalFlag): void {
+  const range = sheet.getRange(flag.range);
+  if ("outside" in flag) {
+    const cf = range.conditionalFormats.add("CellValue" as Excel.ConditionalFormatType);
+    cf.cellValue.format.fill.color = FLAG_STYLE.fill;
+    cf.cellValue.format.font.color = FLAG_STYLE.color;
+    cf.cellValue.rule = { formula1: `=${flag.outside.low}`, formula2: `=${flag.outside.high}`, operator: "NotBetween" };
+  } else {
+    const cf = range.conditionalFormats.add("ContainsText" as Excel.ConditionalFormatType);
+    cf.textComparison.format.fill.color = FLAG_STYLE.fill;
+    cf.textComparison.format.font.color = FLAG_STYLE.color;
+    cf.textComparison.rule = { operator: "Contains" as Excel.ConditionalTextOperator, text: flag.containsText };
+  }
 }

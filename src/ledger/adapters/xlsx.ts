@@ -3,7 +3,7 @@ import { badInput } from "../../engine";
 import { cellAddress, parseCell } from "../describe/addresses";
 import { FORMAT } from "../describe/sheet";
 import { FLAG_STYLE, ROLE_STYLES } from "../describe/styles";
-import type { CellValue, LedgerCell, LedgerDescription } from "../describe/types";
+import type { CellValue, ConditionalFlag, LedgerCell, LedgerDescription } from "../describe/types";
 
 /**
  * Write a ledger description into an exceljs workbook (for an .xlsx file): formulas with
@@ -28,23 +28,26 @@ export function addLedgerToWorkbook(workbook: ExcelJS.Workbook, desc: LedgerDesc
   for (const cell of desc.cells) writeCell(sheet, cell, cached);
   for (const m of desc.merges) sheet.mergeCells(m);
   for (const n of desc.names) workbook.definedNames.add(n.refersTo, n.name);
-  for (const flag of desc.flags) {
-    sheet.addConditionalFormatting({
-      ref: flag.range,
-      rules: [
-        {
-          type: "cellIs",
-          operator: "notBetween" as "between",
-          formulae: [String(flag.outside.low), String(flag.outside.high)],
-          priority: 1,
-          style: { fill: { type: "pattern", pattern: "solid", bgColor: { argb: argb(FLAG_STYLE.fill) } }, font: { color: { argb: argb(FLAG_STYLE.color) } } },
-        },
-      ],
-    });
-  }
+  for (const flag of desc.flags) sheet.addConditionalFormatting({ ref: flag.range, rules: [flagRule(flag)] });
   writeChartBlock(sheet, desc, cached);
   sheet.pageSetup = { ...sheet.pageSetup, orientation: "landscape", fitToPage: true, fitToWidth: 1, fitToHeight: 0 };
   return sheet;
+}
+
+/** True where the cell holds the phrase, ignoring case (SEARCH), as the hosts' text rules compare. */
+export function textFlagFormula(phrase: string, cell: string): string {
+  return `NOT(ISERROR(SEARCH("${phrase.replace(/"/g, '""')}",${cell})))`;
+}
+
+/** One flag as a conditional-format rule: numbers outside limits, or text holding a phrase. */
+function flagRule(flag: ConditionalFlag): ExcelJS.ConditionalFormattingRule {
+  const style: Partial<ExcelJS.Style> = { fill: { type: "pattern", pattern: "solid", bgColor: { argb: argb(FLAG_STYLE.fill) } }, font: { color: { argb: argb(FLAG_STYLE.color) } } };
+  if ("outside" in flag) {
+    return { type: "cellIs", operator: "notBetween" as "between", formulae: [String(flag.outside.low), String(flag.outside.high)], priority: 1, style };
+  }
+  // A formula rule (relative to the range's top-left cell): exceljs writes its text rules without the text attribute.
+  const topLeft = flag.range.split(":")[0];
+  return { type: "expression", formulae: [textFlagFormula(flag.containsText, topLeft)], priority: 1, style };
 }
 
 /** Cells the description writes (for callers that add rows later, e.g. an extension). */

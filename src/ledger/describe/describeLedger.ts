@@ -77,7 +77,7 @@ export function describeLedger(input: LedgerInput): LedgerDescription {
     cells: cells.all(),
     names: ctx.names,
     merges: [rangeAddress(r0, c0, r0, c0 + g.width - 1), rangeAddress(r0 + 1, c0, r0 + 1, c0 + g.width - 1)],
-    flags,
+    flags: [...flags, ...settings.flags],
     chart: chartSpec(ctx, lastRow),
     columnWidths: widths,
     rowHeights: heights,

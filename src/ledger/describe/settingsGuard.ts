@@ -8,7 +8,7 @@
  */
 import { CONSTANT_BOUNDS, COVERAGE_RANGES } from "../../engine";
 import { CONSTANT_SETTINGS } from "./layout";
-import type { SettingKey } from "./types";
+import type { SettingKey, TextFlag } from "./types";
 
 export const GUARD_TEXT = {
   // Short enough to read in the explanation column without widening it.
@@ -18,6 +18,16 @@ export const GUARD_TEXT = {
   fixedHead: "Changed: the layout is built for ",
   fixedTail: ". Type that back.",
 } as const;
+
+/** The phrases every warning begins with: the sheet shades a cell holding one (see guardFlags). */
+const WARNING_PHRASES = [GUARD_TEXT.constant.slice(0, GUARD_TEXT.constant.indexOf(":") + 1), GUARD_TEXT.fixedHead.trim()];
+
+export const GUARD_FLAG_NOTE = "This setting cannot be used as typed: the explanation says what to type instead.";
+
+/** Rose shading on the explanation cells while they show a warning, so a warning stands out from the explanations. */
+export function guardFlags(explainRange: string): TextFlag[] {
+  return WARNING_PHRASES.map((phrase) => ({ range: explainRange, containsText: phrase, note: GUARD_FLAG_NOTE }));
+}
 
 /** A text constant inside a formula (quotes doubled). */
 function literal(text: string): string {

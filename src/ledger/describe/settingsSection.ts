@@ -1,14 +1,14 @@
-import { cellAddress, sheetReference } from "./addresses";
+import { cellAddress, rangeAddress, sheetReference } from "./addresses";
 import { abs, nm, type SectionContext } from "./context";
 import { SECTION, SETTING_ROWS, SETTINGS_HEADER, SETTINGS_NOTES, UNUSED } from "./labels";
 import { SETTING_KEYS } from "./layout";
 import { shownCycles } from "./engineFigures";
-import { settingGuardFormula } from "./settingsGuard";
+import { guardFlags, settingGuardFormula } from "./settingsGuard";
 import { FORMAT } from "./sheet";
-import type { CellKind, CellValue, SettingKey, StyleRole } from "./types";
+import type { CellKind, CellValue, SettingKey, StyleRole, TextFlag } from "./types";
 
 /** Section 1: the settings as named cells, with the values when written beside them. */
-export function settingsSection(ctx: SectionContext): { inUse: Record<SettingKey, string>; written: Record<SettingKey, string> } {
+export function settingsSection(ctx: SectionContext): { inUse: Record<SettingKey, string>; written: Record<SettingKey, string>; flags: TextFlag[] } {
   const { g, cells, f } = ctx;
   const c0 = g.c0;
   const spec = f.model.spec;
@@ -54,5 +54,7 @@ export function settingsSection(ctx: SectionContext): { inUse: Record<SettingKey
     else cells.text(row, c0 + 3, explain, "explain");
     ctx.names.push({ name: nm(ctx, key), refersTo: sheetReference(ctx.sheet, abs(row, c0 + 1)), comment: `Ebb ledger setting: ${text.label}` });
   }
-  return { inUse, written };
+  const settingRows = SETTING_KEYS.map((key) => g.settings.rows[key]);
+  const explainColumn = rangeAddress(Math.min(...settingRows), c0 + 3, Math.max(...settingRows), c0 + 3);
+  return { inUse, written, flags: guardFlags(explainColumn) };
 }

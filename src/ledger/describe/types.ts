@@ -125,11 +125,22 @@ export interface LedgerName {
   comment: string;
 }
 
-export interface ConditionalFlag {
+/** A flagged range: rose shading on the cells that meet the rule, as the host's conditional format. */
+export type ConditionalFlag = ValueFlag | TextFlag;
+
+export interface ValueFlag {
   /** A1 range on the ledger sheet. */
   range: string;
   /** Flag numbers outside [low, high]. */
   outside: { low: number; high: number };
+  note: string;
+}
+
+export interface TextFlag {
+  /** A1 range on the ledger sheet. */
+  range: string;
+  /** Flag text that holds this phrase (as the hosts compare: ignoring case). */
+  containsText: string;
   note: string;
 }
 

@@ -106,7 +106,7 @@ export class GridTable {
     const view = this.workbook.cell(sheet, r, c);
     const right = c + 1 < this.cols ? this.workbook.cell(sheet, r, c + 1) : undefined;
     const decor = this.decor.get(sheet, r, c);
-    const flag = view.kind === "number" ? this.decor.flagged(sheet, r, c, view.value as number) : undefined;
+    const flag = view.kind === "number" || view.kind === "text" ? this.decor.flagged(sheet, r, c, view.value as number | string) : undefined;
     const text = view.kind === "number" && decor?.format ? formatNumber(view.value as number, decor.format) : view.text;
     td.className = cellClasses(view, right, decor, flag !== undefined);
     if (td.classList.contains("overflow")) {

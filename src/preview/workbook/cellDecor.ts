@@ -17,9 +17,13 @@ interface FlagArea {
   left: number;
   bottom: number;
   right: number;
-  low: number;
-  high: number;
-  note: string;
+  flag: ConditionalFlag;
+}
+
+/** Whether a shown value meets a flag's rule (text compared ignoring case, as the hosts do). */
+function meets(flag: ConditionalFlag, value: number | string): boolean {
+  if ("outside" in flag) return typeof value === "number" && (value < flag.outside.low || value > flag.outside.high);
+  return typeof value === "string" && value.toLowerCase().includes(flag.containsText.toLowerCase());
 }
 
 export class DecorStore {
@@ -45,7 +49,7 @@ export class DecorStore {
       const [a, b] = f.range.split(":");
       const p = parseA1(a);
       const q = parseA1(b ?? a);
-      if (p && q) areas.push({ top: p.row, left: p.col, bottom: q.row, right: q.col, low: f.outside.low, high: f.outside.high, note: f.note });
+      if (p && q) areas.push({ top: p.row, left: p.col, bottom: q.row, right: q.col, flag: f });
     }
     this.flags.set(sheet, areas);
   }
@@ -54,10 +58,10 @@ export class DecorStore {
     return this.cells.get(sheet)?.get(`${row},${col}`);
   }
 
-  /** The note of a flag whose range holds this cell and whose limits the value leaves. */
-  flagged(sheet: string, row: number, col: number, value: number): string | undefined {
+  /** The note of a flag whose range holds this cell and whose rule the shown value meets. */
+  flagged(sheet: string, row: number, col: number, value: number | string): string | undefined {
     for (const f of this.flags.get(sheet) ?? []) {
-      if (row >= f.top && row <= f.bottom && col >= f.left && col <= f.right && (value < f.low || value > f.high)) return f.note;
+      if (row >= f.top && row <= f.bottom && col >= f.left && col <= f.right && meets(f.flag, value)) return f.flag.note;
     }
     return undefined;
   }
