@@ -1,4 +1,5 @@
 import { badInput } from "../engine";
+import { padded } from "./describe/correctedInput";
 import { describeLedger } from "./describe/describeLedger";
 import type { ChartSpec, LedgerAnchor, LedgerCell, LedgerDescription, LedgerName } from "./describe/types";
 import { readLedger } from "./verify/readLedger";
@@ -27,13 +28,29 @@ export interface LedgerExtension {
  * that are new. The outlook and scorecard find the last row by themselves, so nothing else
  * is rewritten, except the engine-simulated gaps of a multiplicative outlook.
  */
-export function extendLedger(read: LedgerReader, anchor: LedgerAnchor, newActuals: ArrayLike<number | null | undefined>): LedgerExtension {
+export function extendLedger(
+  read: LedgerReader,
+  anchor: LedgerAnchor,
+  newActuals: ArrayLike<number | null | undefined>,
+  /** On a corrected ledger: the corrections (and reasons) beside the new actuals, if any. */
+  newCorrections?: { values: ArrayLike<number | null | undefined>; reasons?: ArrayLike<string | null | undefined> },
+): LedgerExtension {
   const { input } = readLedger(read, anchor);
   const added = Array.from(newActuals, (v) => (v === undefined ? null : v));
-  while (added.length > 0 && added[added.length - 1] === null) added.pop();
+  const corr = input.corrections;
+  const addedCorrections = corr && newCorrections ? Array.from(newCorrections.values, (v) => v ?? null) : [];
+  // A correction may stand for a new period with no recorded actual; blanks at the end of both are dropped.
+  while (added.length < addedCorrections.length) added.push(null);
+  while (added.length > 0 && added[added.length - 1] === null && (addedCorrections[added.length - 1] ?? null) === null) added.pop();
   if (added.length === 0) throw badInput("no-new-actuals", "There are no new actuals below the history. Type them under the last actual, then extend.");
   const before = describeLedger(input);
-  const after = describeLedger({ ...input, history: [...Array.from(input.history, (v) => v ?? null), ...added] });
+  const history = [...Array.from(input.history, (v) => v ?? null), ...added];
+  const corrections = corr && {
+    ...corr,
+    values: [...padded(corr.values, input.history.length, null), ...padded(addedCorrections, added.length, null)],
+    reasons: [...padded(corr.reasons ?? [], input.history.length, ""), ...padded(Array.from(newCorrections?.reasons ?? [], (r) => r ?? ""), added.length, "")],
+  };
+  const after = describeLedger({ ...input, history, ...(corrections ? { corrections } : {}) });
   const old = new Map(before.cells.map((c) => [c.address, c]));
   const append: LedgerCell[] = [];
   const refresh: LedgerCell[] = [];

@@ -10,7 +10,7 @@ import { demoSeries, ledgerCases, quarterlyMargin } from "./support/cases";
 import { ledgerInHyperFormula } from "./support/hf";
 
 /** Built-in functions the ledger may use: in both HyperFormula 3 and LibreOffice Calc (and Excel). */
-const ALLOWED = ["SUM", "AVERAGE", "ABS", "SQRT", "INDEX", "SLOPE", "IF", "ISNUMBER", "COUNT", "COUNTIF", "SUMSQ", "MOD", "NORM.S.INV", "ROWS", "MAX", "AND", "OR", "EXACT", "TRIM"];
+const ALLOWED = ["SUM", "AVERAGE", "ABS", "SQRT", "INDEX", "SLOPE", "IF", "ISNUMBER", "COUNT", "COUNTIF", "SUMSQ", "MOD", "NORM.S.INV", "ROWS", "MAX", "AND", "OR", "EXACT", "TRIM", "T"];
 
 const input = (over: Partial<LedgerInput> = {}): LedgerInput => ({
   history: demoSeries("Seed trays"),
@@ -23,7 +23,7 @@ const input = (over: Partial<LedgerInput> = {}): LedgerInput => ({
 });
 
 describe("ledger description", () => {
-  const all = ledgerCases().map((c) => describeLedger({ history: c.history, name: c.label, settings: c.settings, horizon: 12, coverage: 0.9, anchor: { sheet: "S", cell: "A1" } }));
+  const all = ledgerCases().map((c) => describeLedger({ history: c.history, name: c.label, settings: c.settings, corrections: c.corrections, horizon: 12, coverage: 0.9, anchor: { sheet: "S", cell: "A1" } }));
 
   it("uses only arithmetic and built-in functions that HyperFormula registers, and no Ebb function", () => {
     const registered = HyperFormula.getRegisteredFunctionNames("enGB");

@@ -7,7 +7,7 @@
  * since the check is that a non-engine layer (the ledger's formulas) reproduces the engine.
  */
 import { bias, fitModel, mad, mape, modelStates, predictionInterval, rmse, trackingSignal, type FittedModel } from "../../src/engine";
-import { ledgerCases } from "./support/cases";
+import { ledgerCases, usedValues } from "./support/cases";
 import { ledgerInHyperFormula, relativeGap } from "./support/hf";
 
 const TOL = 1e-9;
@@ -27,9 +27,9 @@ function engineModel(history: (number | null)[], settings: object): FittedModel 
 describe("ledger formulas in HyperFormula equal the engine", () => {
   for (const c of ledgerCases()) {
     it(c.label, () => {
-      const { desc, value } = ledgerInHyperFormula({ history: c.history, name: c.label, settings: c.settings, horizon: HORIZON, coverage: COVERAGE, anchor: { sheet: "Ledger test", cell: "B3" } });
+      const { desc, value } = ledgerInHyperFormula({ history: c.history, name: c.label, settings: c.settings, corrections: c.corrections, horizon: HORIZON, coverage: COVERAGE, anchor: { sheet: "Ledger test", cell: "B3" } });
       // Source of truth: the engine, run here.
-      const model = engineModel(c.history, c.settings);
+      const model = engineModel(usedValues(c), c.settings);
       const states = modelStates(model);
       const interval = predictionInterval(model, HORIZON, COVERAGE);
       const L = desc.layout;
@@ -72,6 +72,12 @@ describe("ledger formulas in HyperFormula equal the engine", () => {
       close(value(s.tracking), ts[ts.length - 1], "tracking signal");
       expect(value(s.outside)).toBe(Array.from(ts).filter((v) => Math.abs(v) > 4).length);
       expect(value(s.count)).toBe(model.errorCount);
+      // Corrected ledgers: each value used is the correction where there is one, and the scorecard counts them.
+      if (c.corrections) {
+        const used = usedValues(c);
+        L.updates.rows.filter((r) => !r.start).forEach(({ row, period }) => expect(at(row, "used")).toBe(used[period - 1] ?? ""));
+        expect(value(s.corrected!)).toBe(Array.from(c.corrections.values).filter((v) => v !== null && v !== undefined).length);
+      }
 
       // Every other formula cell equals the value the description expects (the engine's, or
       // for bookkeeping steps such as running sums, arithmetic on the engine's figures).

@@ -15,7 +15,7 @@ import { fitModel, mad, modelStates, predictionInterval, rmse } from "../../src/
 import { describeLedger, type LedgerDescription, type LedgerInput } from "../../src/ledger";
 import { addLedgerToWorkbook } from "../../src/ledger/adapters/xlsx";
 import { writeLedgerWorkbook } from "../../src/ledger/xlsx/writeLedgerWorkbook";
-import { demoColumns, ledgerCases } from "./support/cases";
+import { demoColumns, ledgerCases, usedValues } from "./support/cases";
 import { convertWithLibreOffice, findSoffice, requireProgram } from "./support/libreoffice";
 
 const soffice = findSoffice();
@@ -54,7 +54,9 @@ function compareSheet(ws: ExcelJS.Worksheet, desc: LedgerDescription): { checked
 
 /** The engine run by the test itself, compared with what LibreOffice computed. */
 function compareWithEngine(ws: ExcelJS.Worksheet, desc: LedgerDescription, input: LedgerInput): void {
-  const model = fitModel(input.history, { ...input.settings, ...desc.constants } as Parameters<typeof fitModel>[1]);
+  // A corrected ledger's models run on the values used (the correction where there is one).
+  const used = usedValues({ label: "", history: Array.from(input.history, (v) => v ?? null), settings: input.settings, corrections: input.corrections });
+  const model = fitModel(used, { ...input.settings, ...desc.constants } as Parameters<typeof fitModel>[1]);
   const states = modelStates(model);
   const interval = predictionInterval(model, input.horizon, input.coverage);
   const num = (a: string) => resultOf(ws.getCell(a)) as number;
@@ -84,7 +86,7 @@ describe("LibreOffice recomputes the .xlsx ledger", () => {
     const workbook = new ExcelJS.Workbook();
     const sheets: { desc: LedgerDescription; input: LedgerInput }[] = [];
     ledgerCases().forEach((c, i) => {
-      const input: LedgerInput = { history: c.history, name: c.label, settings: c.settings, horizon: 12, coverage: 0.9, anchor: { sheet: `Case ${i + 1}`, cell: i % 3 === 0 ? "A1" : "C3" }, tag: `Case${i + 1}` };
+      const input: LedgerInput = { history: c.history, name: c.label, settings: c.settings, corrections: c.corrections, horizon: 12, coverage: 0.9, anchor: { sheet: `Case ${i + 1}`, cell: i % 3 === 0 ? "A1" : "C3" }, tag: `Case${i + 1}` };
       const desc = describeLedger(input);
       addLedgerToWorkbook(workbook, desc, { cachedResults: false });
       sheets.push({ desc, input });

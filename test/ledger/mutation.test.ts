@@ -1,16 +1,16 @@
 /**
- * Mutation test of the check: 240 random single changes (seeded), each on a ledger written
+ * Mutation test of the check: 288 random single changes (seeded), each on a ledger written
  * next to its history, of seven kinds: a formula replaced by its own value or by another
- * number, an actual in the ledger replaced by a number, a figure changed in the source
- * history, text typed into an empty cell of the block, a settings cell out of range or not an
+ * number, an actual or a correction in the ledger replaced by a number, a figure changed in
+ * the source history or in its corrections column, text typed into an empty cell of the block, a settings cell out of range or not an
  * option word, a formula deleted. The check must report every one at the changed cell (for a
- * changed history figure: at the ledger's actual that refers to it, naming the history cell).
+ * changed source figure: at the ledger's cell that refers to it, naming the source cell).
  * Expected values: the changes this test made. Untouched ledgers give no finding.
  */
 import { mulberry32 } from "../../src/preview/demo/generate-demo";
 import { hyperFormulaReader, verifyLedger, type LedgerCell, type LedgerInput } from "../../src/ledger";
 import { cellAddress } from "../../src/ledger/describe/addresses";
-import { demoSeries, quarterlyMargin, workdays } from "./support/cases";
+import { correctionsAt, demoSeries, quarterlyMargin, workdays } from "./support/cases";
 import { HISTORY_SHEET, sourcedLedger } from "./support/sourced";
 
 const ledgers: Omit<LedgerInput, "source">[] = [
@@ -18,6 +18,15 @@ const ledgers: Omit<LedgerInput, "source">[] = [
   { history: demoSeries("Flower bulbs"), name: "Bulbs", settings: { period: 12, seasonality: "multiplicative", trend: "damped" }, horizon: 6, coverage: 0.9, anchor: { sheet: "Gaps", cell: "C4" } },
   { history: quarterlyMargin(), name: "Margin", settings: { period: 4, seasonality: "additive", trend: "damped", start: "classic" }, horizon: 6, coverage: 0.9, anchor: { sheet: "Add", cell: "A1" } },
   { history: workdays(), name: "Days", settings: { period: 5, seasonality: "additive", trend: "none" }, horizon: 6, coverage: 0.9, anchor: { sheet: "Odd", cell: "B2" } },
+  {
+    history: demoSeries("Hose reels"),
+    name: "Corrected",
+    settings: { period: 12, seasonality: "multiplicative", trend: "linear" },
+    corrections: correctionsAt(demoSeries("Hose reels").length, [[3, 180, "invented promotion"], [30, 260, "invented stock-out"], [60, 240, "invented one-off order"]]),
+    horizon: 6,
+    coverage: 0.9,
+    anchor: { sheet: "Corrected", cell: "B3" },
+  },
   { history: demoSeries("Hose reels").slice(0, 30), name: "Plain", settings: { period: 1, trend: "linear", start: "classic" }, horizon: 6, coverage: 0.9, anchor: { sheet: "Plain", cell: "A1" } },
 ];
 
@@ -62,12 +71,13 @@ describe("the check reports every single change at its cell", () => {
           at = c;
           expectIn = c.address;
         } else if (kind === "history-changed") {
+          // An actual's history cell (column B) or a correction's cell (column C) changed.
           const c = pick(sources);
-          const t = Number(/\$(\d+)\)/.exec(c.formula!)![1]) - 2;
-          put(historySheet, 1 + t, 1, (c.value as number) + 5 + Math.round(rand() * 50));
+          const [, letter, row] = /\$([A-Z]+)\$(\d+)\)/.exec(c.formula!)!;
+          put(historySheet, Number(row) - 1, letter.charCodeAt(0) - 65, (c.value as number) + 5 + Math.round(rand() * 50));
           at = c;
           expectIn = c.address;
-          expect(c.source).toBe(`${HISTORY_SHEET}!B${t + 2}`);
+          expect(c.source).toBe(`${HISTORY_SHEET}!${letter}${row}`);
         } else if (kind === "text-in-empty") {
           let r: number, k: number;
           do {

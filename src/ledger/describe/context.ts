@@ -18,14 +18,18 @@ export interface SectionContext {
   names: LedgerName[];
   /** The history's cells, when the actuals refer to them. */
   source?: HistorySource;
+  /** The actuals as recorded, one per period (null = blank); the engine ran on the values used. */
+  actuals: (number | null)[];
+  /** The corrections, when the ledger has correction columns (one per period). */
+  corrections?: { values: (number | null)[]; reasons: string[]; source?: HistorySource; reasonSource?: HistorySource };
   /** Cells other sections refer to, filled in as sections are built. */
   refs: {
     startLevel?: string;
     startTrend?: string;
     /** Absolute address of the start index for each season position (0-based). */
     startIndex: string[];
-    /** Absolute address of the start-table actual for each period 0..window-1. */
-    startActual: string[];
+    /** Start-table cells of each period 0..window-1 (actual, value used, correction, reason). */
+    startPeriods: import("./periodCells").PeriodRefs[];
     outlookRows?: string;
   };
 }

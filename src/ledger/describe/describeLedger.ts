@@ -3,6 +3,7 @@ import { chartSpec } from "./chartSection";
 import type { SectionContext } from "./context";
 import { engineFigures, shownCycles } from "./engineFigures";
 import { SUBTITLE, title } from "./labels";
+import { ledgerFigures, padded } from "./correctedInput";
 import { ledgerGeometry, updateRowCount } from "./layout";
 import { checkTag, defaultTag, ledgerName } from "./names";
 import { outlookSection } from "./outlookSection";
@@ -22,9 +23,18 @@ export function describeLedger(input: LedgerInput): LedgerDescription {
   const sheet = checkSheetName(input.anchor.sheet);
   const { row: r0, col: c0 } = parseCell(input.anchor.cell);
   const tag = checkTag(input.tag ?? defaultTag(sheet, input.anchor.cell));
-  const f = engineFigures(input.history, input.settings, input.horizon, input.coverage);
+  const figures = ledgerFigures(input);
+  const f = engineFigures(figures.used, input.settings, input.horizon, input.coverage);
   const spec = f.model.spec;
-  const g = ledgerGeometry(r0, c0, { model: f.model.shape, horizon: input.horizon, updateRows: updateRowCount(f.model.shape, f.y.length) });
+  const n = f.y.length;
+  const actuals = figures.actuals.slice(0, n);
+  while (actuals.length < n) actuals.push(null);
+  const corrections = figures.corrections && {
+    ...figures.corrections,
+    values: padded(figures.corrections.values, n, null),
+    reasons: padded(figures.corrections.reasons, n, ""),
+  };
+  const g = ledgerGeometry(r0, c0, { model: f.model.shape, horizon: input.horizon, updateRows: updateRowCount(f.model.shape, n), corrections: corrections !== undefined });
   const name = (input.name ?? "").trim() || "History";
   const cells = new SheetCells();
   const ctx: SectionContext = {
@@ -38,7 +48,9 @@ export function describeLedger(input: LedgerInput): LedgerDescription {
     coverage: input.coverage,
     names: [],
     source: input.source,
-    refs: { startIndex: [], startActual: [] },
+    actuals,
+    ...(corrections ? { corrections } : {}),
+    refs: { startIndex: [], startPeriods: [] },
   };
 
   cells.text(r0, c0, title(name), "title");
@@ -70,7 +82,8 @@ export function describeLedger(input: LedgerInput): LedgerDescription {
       coverage: input.coverage,
     },
     constants: { ...f.model.constants },
-    history: Array.from(f.y, (v) => (Number.isNaN(v) ? null : v)),
+    history: actuals,
+    ...(corrections ? { corrections: { ...corrections, values: [...corrections.values], reasons: [...corrections.reasons] } } : {}),
     dataScale: f.scale,
     ...(input.source ? { source: { ...input.source } } : {}),
     name,

@@ -99,6 +99,19 @@ export const UPDATE_COLUMNS = {
     label: "Tracking signal",
     note: "Errors so far / MAD so far (0 until there is an error). Outside -4 to +4 it is flagged: the forecasts lean one way.",
   },
+  correction: {
+    label: "Correction",
+    note: "The planner's figure for this period (a promotion, stock-out or one-off order taken out). Blank: the actual is used. It refers to the corrections column the ledger was written from.",
+  },
+  reason: { label: "Reason", note: "Why the period was corrected, as typed beside the correction." },
+  used: {
+    label: "Value used",
+    note: "What every update on this row reads: the correction where there is one, else the actual.",
+  },
+  correctionWritten: {
+    label: "Correction when written",
+    note: `Copy of the correction as it was when the ledger was written or extended. No formula uses it; "${ACTIONS.verify}" compares the Correction column with it.`,
+  },
   written: {
     label: "Actual when written",
     note: `Copy of the actual as it was when the ledger was written or extended. No formula uses it; "${ACTIONS.verify}" compares the Actual column with it.`,
@@ -132,6 +145,10 @@ export const START_COLUMNS = {
   lineX: { label: "Period in line", note: "The period number where there is a seasonally adjusted value; the straight line is fitted through these points." },
   lineXNone: { label: "Period in line", note: "The period number where there is an actual; the straight line is fitted through these points." },
   rank: { label: "Average rank", note: "1, 2, 3, ... down the moving averages; the classic start fits its straight line to the moving averages against this rank." },
+  correction: UPDATE_COLUMNS.correction,
+  reason: UPDATE_COLUMNS.reason,
+  used: UPDATE_COLUMNS.used,
+  correctionWritten: UPDATE_COLUMNS.correctionWritten,
   written: UPDATE_COLUMNS.written,
 } as const;
 
@@ -218,6 +235,7 @@ export const SCORE_ROWS = {
   tracking: { label: "Tracking signal, latest", note: "The tracking signal in the last row of the update table." },
   outside: { label: "Rows outside +/-4", note: "Number of update rows whose tracking signal is above 4 or below -4 (those cells are shaded)." },
   count: { label: "Errors counted", note: "Update rows with an actual." },
+  corrected: { label: "Periods corrected", note: "Periods whose value used is a correction instead of the actual (start table and update rows)." },
 } as const;
 
 export const CHART = {

@@ -39,6 +39,8 @@ export interface LayoutShape {
   horizon: number;
   /** Rows in the update table, start rows included. */
   updateRows: number;
+  /** Correction, reason and value-used columns after the actual (and a written copy of the correction). */
+  corrections?: boolean;
 }
 
 /** Start rows of the update table: the last season of the start window (one row without seasons). */
@@ -86,9 +88,12 @@ function columns<K extends string>(keys: (K | false)[], c0: number): Partial<Rec
   return out;
 }
 
-export function startColumnKeys(m: ModelShape): StartColumnKey[] {
+/** The columns a corrected ledger puts after its actual: the correction, its reason, the value the updates use. */
+const CORRECTION_KEYS = ["correction", "reason", "used"] as const;
+
+export function startColumnKeys(m: ModelShape, corrections = false): StartColumnKey[] {
   const s = { seasonal: m.seasonal, start: m.start, trend: m.trend };
-  const keys: (StartColumnKey | false)[] = ["period", s.seasonal && "position", "actual"];
+  const keys: (StartColumnKey | false)[] = ["period", s.seasonal && "position", "actual", ...(corrections ? CORRECTION_KEYS : [])];
   if (s.seasonal) {
     keys.push("average", "detrended");
     if (s.start === "decomposition") keys.push("adjusted", s.trend !== "none" && "lineX");
@@ -97,6 +102,7 @@ export function startColumnKeys(m: ModelShape): StartColumnKey[] {
     keys.push("lineX");
   }
   keys.push("written");
+  if (corrections) keys.push("correctionWritten");
   return keys.filter((k): k is StartColumnKey => k !== false);
 }
 
@@ -107,6 +113,7 @@ export function ledgerGeometry(r0: number, c0: number, shape: LayoutShape): Geom
     "period",
     s.seasonal && "position",
     "actual",
+    ...(shape.corrections ? CORRECTION_KEYS : []),
     "forecast",
     "error",
     "absError",
@@ -118,6 +125,7 @@ export function ledgerGeometry(r0: number, c0: number, shape: LayoutShape): Geom
     "mad",
     "tracking",
     "written",
+    shape.corrections === true && "correctionWritten",
   ];
   const updateCols = columns(updateKeys, c0);
   const width = Object.keys(updateCols).length;
@@ -147,7 +155,7 @@ export function ledgerGeometry(r0: number, c0: number, shape: LayoutShape): Geom
   const outlookLast = outlookHeader + s.horizon;
 
   const startHeading = outlookLast + 2;
-  const startKeys = startColumnKeys(m);
+  const startKeys = startColumnKeys(m, shape.corrections === true);
   const startCols = columns(startKeys, c0);
   const sideCol = c0 + startKeys.length + 1;
   const startFirst = startHeading + 2;

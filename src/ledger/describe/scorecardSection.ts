@@ -1,15 +1,15 @@
 import { cellAddress } from "./addresses";
-import { nm, type SectionContext } from "./context";
+import { abs, nm, type SectionContext } from "./context";
 import { MAPE_UNDEFINED } from "./engineFigures";
 import { SCORE_ROWS, SECTION } from "./labels";
 import { FORMAT } from "./sheet";
 import { RELATIVE_TOLERANCE } from "./tolerance";
 import { trackingScoreRows } from "./trackingColumns";
 
-type ScoreKey = "mad" | "rmse" | "mape" | "bias" | "tracking" | "outside" | "count";
+type ScoreKey = "mad" | "rmse" | "mape" | "bias" | "tracking" | "outside" | "count" | "corrected";
 
 /** Section 5: accuracy over the update rows, with the count of tracking-signal flags. */
-export function scorecardSection(ctx: SectionContext): Record<ScoreKey, string> {
+export function scorecardSection(ctx: SectionContext): Record<Exclude<ScoreKey, "corrected">, string> & { corrected?: string } {
   const { g, cells, f } = ctx;
   const s = g.score;
   const errors = nm(ctx, "errors");
@@ -33,6 +33,8 @@ export function scorecardSection(ctx: SectionContext): Record<ScoreKey, string> 
     outside,
     ["count", `=COUNT(${errors})`, f.score.count, FORMAT.count, undefined],
   ];
+  const corrected = correctedRow(ctx);
+  if (corrected) rowsOut.push(corrected);
   const out = {} as Record<ScoreKey, string>;
   rowsOut.forEach(([key, formula, value, format, tolerance], i) => {
     const r = s.first + i;
@@ -42,4 +44,17 @@ export function scorecardSection(ctx: SectionContext): Record<ScoreKey, string> 
     out[key] = cellAddress(r, s.valueCol);
   });
   return out;
+}
+
+/** Periods corrected: the corrections of the start table plus those of the update rows after it. */
+function correctedRow(ctx: SectionContext): [ScoreKey, string, number, string, undefined] | undefined {
+  const { g, f } = ctx;
+  const sc = g.start.cols.correction;
+  const uc = g.updates.cols.correction;
+  if (!ctx.corrections || sc === undefined || uc === undefined) return undefined;
+  const startRange = `${abs(g.start.first, sc)}:${abs(g.start.first + f.window - 1, sc)}`;
+  const firstOwn = g.updates.firstUpdate + (Math.max(f.window, f.firstUpdate) - f.firstUpdate);
+  const updateRange = `${abs(firstOwn, uc)}:${abs(g.updates.reachLast, uc)}`;
+  const count = ctx.corrections.values.filter((v) => v !== null).length;
+  return ["corrected", `=COUNT(${startRange})+COUNT(${updateRange})`, count, FORMAT.count, undefined];
 }

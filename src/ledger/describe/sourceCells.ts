@@ -21,9 +21,28 @@ export function sourceAddress(source: HistorySource, t: number): string {
 
 /** The actual of period t at (row, col): a reference to its source cell, or the typed value. */
 export function putActual(ctx: SectionContext, row: number, col: number, t: number): void {
-  const y = ctx.f.y[t];
-  const value = Number.isNaN(y) ? null : y;
-  const source = ctx.source;
+  putFigure(ctx, row, col, t, ctx.actuals[t] ?? null, ctx.source);
+}
+
+/** The correction of period t: a reference to the corrections' cell, or the typed figure. */
+export function putCorrection(ctx: SectionContext, row: number, col: number, t: number): void {
+  const c = ctx.corrections!;
+  putFigure(ctx, row, col, t, c.values[t] ?? null, c.source);
+}
+
+/** The reason of period t: a reference to the reasons' cell (T() keeps text, blank otherwise), or the typed text. */
+export function putReason(ctx: SectionContext, row: number, col: number, t: number): void {
+  const c = ctx.corrections!;
+  const text = c.reasons[t] ?? "";
+  if (!c.reasonSource) {
+    ctx.cells.put(row, col, "reason", "input", text === "" ? null : text);
+    return;
+  }
+  const cell = ctx.cells.put(row, col, "reason", "actual", text, { formula: `=T(${sourceReference(c.reasonSource, t)})` });
+  cell.source = sourceAddress(c.reasonSource, t);
+}
+
+function putFigure(ctx: SectionContext, row: number, col: number, t: number, value: number | null, source: HistorySource | undefined): void {
   if (!source) {
     ctx.cells.put(row, col, "actual", "actual", value, { format: FORMAT.actual });
     return;
@@ -31,6 +50,12 @@ export function putActual(ctx: SectionContext, row: number, col: number, t: numb
   const ref = sourceReference(source, t);
   const cell = ctx.cells.put(row, col, "source", "actual", value ?? "", { formula: `=IF(ISNUMBER(${ref}),${ref},"")`, format: FORMAT.actual });
   cell.source = sourceAddress(source, t);
+}
+
+/** The source of a ledger's reasons read back from the formula of one of its reason cells (period t). */
+export function parseReasonFormula(formula: string | undefined, t: number): HistorySource | undefined {
+  const m = formula ? /^=?\s*T\(\s*(.+?)\s*\)\s*$/i.exec(formula) : null;
+  return m ? parseSourceFormula(`=IF(ISNUMBER(${m[1]}),`, t) : undefined;
 }
 
 /** The source of a ledger read back from the formula of one of its actuals (period t), if it is a reference. */

@@ -2,7 +2,7 @@ import { cellAddress } from "./addresses";
 import { abs, nm, type SectionContext } from "./context";
 import { INDEX_TABLE, LINE_ROWS, SECTION, START_COLUMNS } from "./labels";
 import { FORMAT } from "./sheet";
-import { putActual } from "./sourceCells";
+import { putPeriodFigures } from "./periodCells";
 
 /**
  * Section 2: the start table (period, position, actual, moving average, ratio or difference,
@@ -23,6 +23,8 @@ export function startSection(ctx: SectionContext): void {
   const season = nm(ctx, "season");
   const row = (t: number) => s.first + t;
   const at = (t: number, key: keyof typeof cols) => cellAddress(row(t), cols[key]!);
+  // What the start reads: the value used on a corrected ledger, else the actual.
+  const Y: keyof typeof cols = cols.used !== undefined ? "used" : "actual";
 
   cells.text(s.heading, g.c0, SECTION.start, "heading");
   // Column headers.
@@ -30,6 +32,7 @@ export function startSection(ctx: SectionContext): void {
   header("period", START_COLUMNS.period.label, START_COLUMNS.period.note);
   if (cols.position !== undefined) header("position", START_COLUMNS.position.label, START_COLUMNS.position.note);
   header("actual", START_COLUMNS.actual.label, START_COLUMNS.actual.note);
+  for (const k of ["correction", "reason", "used"] as const) if (cols[k] !== undefined) header(k, START_COLUMNS[k].label, START_COLUMNS[k].note);
   if (cols.average !== undefined) header("average", START_COLUMNS.average.label, p % 2 === 0 ? START_COLUMNS.average.noteEven : START_COLUMNS.average.noteOdd);
   if (cols.detrended !== undefined) {
     header("detrended", mult ? START_COLUMNS.detrended.labelMult : START_COLUMNS.detrended.labelAdd, mult ? START_COLUMNS.detrended.noteMult : START_COLUMNS.detrended.noteAdd);
@@ -38,15 +41,13 @@ export function startSection(ctx: SectionContext): void {
   if (cols.lineX !== undefined) header("lineX", START_COLUMNS.lineX.label, f.seasonal ? START_COLUMNS.lineX.note : START_COLUMNS.lineXNone.note);
   if (cols.rank !== undefined) header("rank", START_COLUMNS.rank.label, START_COLUMNS.rank.note);
   header("written", START_COLUMNS.written.label, START_COLUMNS.written.note);
+  if (cols.correctionWritten !== undefined) header("correctionWritten", START_COLUMNS.correctionWritten.label, START_COLUMNS.correctionWritten.note);
 
-  // Period, position, actual and its written copy.
+  // Period, position, actual (correction, reason, value used) and the written copies.
   for (let t = 0; t < W; t++) {
-    const y = f.y[t];
     cells.put(row(t), cols.period!, "constant", "label", t + 1, { format: FORMAT.period });
     if (cols.position !== undefined) cells.put(row(t), cols.position, "constant", "label", (t % p) + 1, { format: FORMAT.period });
-    putActual(ctx, row(t), cols.actual!, t);
-    cells.put(row(t), cols.written!, "constant", "written", Number.isNaN(y) ? null : y, { format: FORMAT.actual });
-    ctx.refs.startActual.push(abs(row(t), cols.actual!));
+    ctx.refs.startPeriods.push(putPeriodFigures(ctx, row(t), cols, t));
   }
 
   // Moving average and ratio (or difference) where a whole centred season fits in the table.
@@ -55,12 +56,12 @@ export function startSection(ctx: SectionContext): void {
   if (f.seasonal && detail) {
     for (let t = half; t + half <= W - 1; t++) {
       maRows.push(t);
-      const first = at(t - half, "actual");
-      const last = at(t + half, "actual");
+      const first = at(t - half, Y);
+      const last = at(t + half, Y);
       const span = `${first}:${last}`;
       let formula: string;
       if (p % 2 === 0) {
-        const inner = `${at(t - half + 1, "actual")}:${at(t + half - 1, "actual")}`;
+        const inner = `${at(t - half + 1, Y)}:${at(t + half - 1, Y)}`;
         formula = `=IF(COUNT(${span})=ROWS(${span}),(0.5*${first}+0.5*${last}+SUM(${inner}))/${season},"")`;
       } else {
         formula = `=IF(COUNT(${span})=ROWS(${span}),SUM(${span})/${season},"")`;
@@ -69,7 +70,7 @@ export function startSection(ctx: SectionContext): void {
       cells.formula(row(t), cols.average!, formula, Number.isNaN(ma) ? "" : ma, FORMAT.units);
       const ratio = detail.detrended[t];
       const op = mult ? "/" : "-";
-      cells.formula(row(t), cols.detrended!, `=IF(ISNUMBER(${at(t, "average")}),${at(t, "actual")}${op}${at(t, "average")},"")`, Number.isNaN(ratio) ? "" : ratio, mult ? FORMAT.ratio : FORMAT.units);
+      cells.formula(row(t), cols.detrended!, `=IF(ISNUMBER(${at(t, "average")}),${at(t, Y)}${op}${at(t, "average")},"")`, Number.isNaN(ratio) ? "" : ratio, mult ? FORMAT.ratio : FORMAT.units);
     }
   }
 
@@ -97,10 +98,10 @@ export function startSection(ctx: SectionContext): void {
     for (let t = 0; t < W; t++) {
       const op = mult ? "/" : "-";
       const v = adjusted[t];
-      cells.formula(row(t), cols.adjusted, `=IF(ISNUMBER(${at(t, "actual")}),${at(t, "actual")}${op}${ctx.refs.startIndex[t % p]},"")`, v === null ? "" : v, FORMAT.units);
+      cells.formula(row(t), cols.adjusted, `=IF(ISNUMBER(${at(t, Y)}),${at(t, Y)}${op}${ctx.refs.startIndex[t % p]},"")`, v === null ? "" : v, FORMAT.units);
     }
   }
-  const yCol = cols.adjusted !== undefined ? "adjusted" : "actual";
+  const yCol: keyof typeof cols = cols.adjusted !== undefined ? "adjusted" : Y;
   if (cols.lineX !== undefined) {
     for (let t = 0; t < W; t++) {
       const present = !Number.isNaN(f.y[t]);
@@ -132,9 +133,9 @@ export function startSection(ctx: SectionContext): void {
     trendFormula = hasTrend ? `=${slope}` : null;
     trendNote = hasTrend ? LINE_ROWS.trend.noteLine : LINE_ROWS.trend.noteNone;
   } else if (classic) {
-    levelFormula = `=${cellAddress(row(1), cols.actual!)}`;
+    levelFormula = `=${cellAddress(row(1), cols[Y]!)}`;
     levelNote = LINE_ROWS.level.noteClassicNone;
-    trendFormula = hasTrend ? `=${cellAddress(row(1), cols.actual!)}-${cellAddress(row(0), cols.actual!)}` : null;
+    trendFormula = hasTrend ? `=${cellAddress(row(1), cols[Y]!)}-${cellAddress(row(0), cols[Y]!)}` : null;
     trendNote = hasTrend ? LINE_ROWS.trend.noteClassicNone : LINE_ROWS.trend.noteNone;
   } else if (hasTrend) {
     const xs = yRange("lineX");

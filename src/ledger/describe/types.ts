@@ -59,6 +59,24 @@ export interface LedgerInput {
    * are typed in as numbers.
    */
   source?: HistorySource;
+  /**
+   * Planner corrections kept beside the actuals (the engine's applyCorrections rule): the
+   * ledger shows the actual, the correction, its reason and the value used, and the updates use
+   * the value used. Left out, the ledger has no correction columns.
+   */
+  corrections?: LedgerCorrections;
+}
+
+/** Corrections of a ledger: per period, a figure (null = none) and a reason. */
+export interface LedgerCorrections {
+  /** One per period of the history, oldest first; null (or undefined) keeps the actual. */
+  values: ArrayLike<number | null | undefined>;
+  /** One per period; blank where there is none. */
+  reasons?: ArrayLike<string | null | undefined>;
+  /** The corrections' cells: the ledger's corrections then refer to them, like the actuals to the history. */
+  source?: HistorySource;
+  /** The reasons' cells, referred to the same way. */
+  reasonSource?: HistorySource;
 }
 
 /** How a cell looks; adapters map roles to fonts and fills (see styles.ts). */
@@ -87,9 +105,11 @@ export type StyleRole =
  * - setting: a setting the user may change (alpha, beta, gamma, phi, coverage);
  * - fixed-setting: a setting the layout was built for (season length, seasonality, ...);
  * - engine: a number the engine produced that no formula can reproduce (simulated gaps);
+ * - reason: the reason for a correction: free text (or a reference to the reasons column, which
+ *   must stay that reference); its words are not compared;
  * - constant: labels, period numbers, positions, the written record.
  */
-export type CellKind = "formula" | "actual" | "source" | "setting" | "fixed-setting" | "engine" | "constant";
+export type CellKind = "formula" | "actual" | "source" | "setting" | "fixed-setting" | "engine" | "reason" | "constant";
 
 export type CellValue = number | string | null;
 
@@ -169,7 +189,7 @@ export interface LedgerLayout {
   /** Settings "in use" cells (named) and "when written" cells, by key. */
   settings: Record<SettingKey, string>;
   written: Record<SettingKey, string>;
-  scorecard: Record<"mad" | "rmse" | "mape" | "bias" | "tracking" | "outside" | "count", string>;
+  scorecard: Record<"mad" | "rmse" | "mape" | "bias" | "tracking" | "outside" | "count", string> & { corrected?: string };
   outlook: { firstRow: number; rows: OutlookRowCells[] };
   updates: {
     headerRow: number;
@@ -226,9 +246,26 @@ export type UpdateColumnKey =
   | "errorSum"
   | "mad"
   | "tracking"
+  | "correction"
+  | "reason"
+  | "used"
+  | "correctionWritten"
   | "written";
 
-export type StartColumnKey = "period" | "position" | "actual" | "average" | "detrended" | "adjusted" | "lineX" | "rank" | "written";
+export type StartColumnKey =
+  | "period"
+  | "position"
+  | "actual"
+  | "correction"
+  | "reason"
+  | "used"
+  | "average"
+  | "detrended"
+  | "adjusted"
+  | "lineX"
+  | "rank"
+  | "written"
+  | "correctionWritten";
 
 export interface OutlookRowCells {
   h: number;
@@ -260,6 +297,8 @@ export interface LedgerDescription {
   dataScale: number;
   /** The history's cells the actuals refer to (undefined: typed actuals). */
   source?: HistorySource;
+  /** The corrections as written (undefined: a ledger without correction columns). */
+  corrections?: { values: (number | null)[]; reasons: string[]; source?: HistorySource; reasonSource?: HistorySource };
   name: string;
   cells: LedgerCell[];
   names: LedgerName[];

@@ -3,7 +3,7 @@ import { abs, nm, type SectionContext } from "./context";
 import { FLAG_NOTE, SECTION, START_ROW_NOTE, UPDATE_COLUMNS } from "./labels";
 import { startRowCount } from "./layout";
 import { FORMAT } from "./sheet";
-import { putActual } from "./sourceCells";
+import { linkPeriodFigures, putPeriodFigures } from "./periodCells";
 import type { ConditionalFlag, UpdateColumnKey } from "./types";
 import { TRACKING_LIMIT, trackingCells } from "./trackingColumns";
 import { RELATIVE_TOLERANCE } from "./tolerance";
@@ -55,6 +55,10 @@ export function updatesSection(ctx: SectionContext): { rows: { period: number; r
     errorSum: [UPDATE_COLUMNS.errorSum.label, UPDATE_COLUMNS.errorSum.note],
     mad: [UPDATE_COLUMNS.mad.label, UPDATE_COLUMNS.mad.note],
     tracking: [UPDATE_COLUMNS.tracking.label, UPDATE_COLUMNS.tracking.note],
+    correction: [UPDATE_COLUMNS.correction.label, UPDATE_COLUMNS.correction.note],
+    reason: [UPDATE_COLUMNS.reason.label, UPDATE_COLUMNS.reason.note],
+    used: [UPDATE_COLUMNS.used.label, UPDATE_COLUMNS.used.note],
+    correctionWritten: [UPDATE_COLUMNS.correctionWritten.label, UPDATE_COLUMNS.correctionWritten.note],
     written: [UPDATE_COLUMNS.written.label, UPDATE_COLUMNS.written.note],
   };
   for (const key of Object.keys(cols) as UpdateColumnKey[]) {
@@ -72,8 +76,7 @@ export function updatesSection(ctx: SectionContext): { rows: { period: number; r
     rows.push({ period: t + 1, row: r, start: true });
     cells.put(r, cols.period!, "constant", "start", t + 1, { format: FORMAT.period, ...(i === 0 ? { note: START_ROW_NOTE } : {}) });
     if (cols.position !== undefined) cells.put(r, cols.position, "constant", "start", (t % p) + 1, { format: FORMAT.period });
-    const src = ctx.refs.startActual[t];
-    cells.formula(r, cols.actual!, `=IF(ISNUMBER(${src}),${src},"")`, Number.isNaN(f.y[t]) ? "" : f.y[t], FORMAT.actual, "linked");
+    linkPeriodFigures(ctx, r, cols, t, ctx.refs.startPeriods[t]);
     if (i === startRows - 1) {
       cells.formula(r, cols.level!, `=${ctx.refs.startLevel}`, state.level, FORMAT.units, "linked");
       if (hasTrend) cells.formula(r, cols.trend!, `=${ctx.refs.startTrend}`, state.trend, FORMAT.trend, "linked");
@@ -116,14 +119,10 @@ export function appendUpdateRow(ctx: SectionContext, t: number, rows: { period: 
 
   cells.put(r, cols.period!, "constant", "label", t + 1, { format: FORMAT.period });
   if (cols.position !== undefined) cells.put(r, cols.position, "constant", "label", (t % p) + 1, { format: FORMAT.period });
-  if (t < f.window) {
-    const src = ctx.refs.startActual[t];
-    cells.formula(r, cols.actual!, `=IF(ISNUMBER(${src}),${src},"")`, present ? y : "", FORMAT.actual, "linked");
-  } else {
-    putActual(ctx, r, cols.actual!, t);
-    cells.put(r, cols.written!, "constant", "written", present ? y : null, { format: FORMAT.actual });
-  }
-  const A = c("actual");
+  if (t < f.window) linkPeriodFigures(ctx, r, cols, t, ctx.refs.startPeriods[t]);
+  else putPeriodFigures(ctx, r, cols, t);
+  // Every update reads the value used (the correction where there is one) on a corrected ledger.
+  const A = c(cols.used !== undefined ? "used" : "actual");
   const Lp = c("level", r - 1);
   const Tp = c("trend", r - 1);
   const S = cols.index !== undefined ? c("index", r - p) : "";

@@ -1,7 +1,8 @@
 import { badInput, modelShape, type ModelShape, type Seasonality, type TrendKind } from "../../engine";
 import { MAX_ROWS, parseCell } from "../describe/addresses";
 import { ledgerGeometry, SETTING_KEYS, startRowCount, type Geometry } from "../describe/layout";
-import { parseSourceFormula } from "../describe/sourceCells";
+import { START_COLUMNS } from "../describe/labels";
+import { parseReasonFormula, parseSourceFormula } from "../describe/sourceCells";
 import type { HistorySource, LedgerAnchor, LedgerInput, SettingKey } from "../describe/types";
 import type { LedgerReader } from "./reader";
 
@@ -58,18 +59,35 @@ export function readLedger(read: LedgerReader, anchor: LedgerAnchor): ReadLedger
     throw badInput("not-a-ledger", `No Ebb ledger starts at ${anchor.sheet}!${anchor.cell}: its settings block is missing or damaged. Select the ledger's top-left cell (its title).`);
   }
   const shape = modelShape({ period: p, seasonality: seasonality as Seasonality, trend: trend as TrendKind, start, cycles });
-  const g = ledgerGeometry(r0, c0, { model: shape, horizon, updateRows: startRowCount(shape) });
+  const plain = ledgerGeometry(r0, c0, { model: shape, horizon, updateRows: startRowCount(shape) });
+  // A corrected ledger has its correction column right after the actual.
+  const corrected = read(plain.start.header, plain.start.cols.actual! + 1).value === START_COLUMNS.correction.label;
+  const g = corrected ? ledgerGeometry(r0, c0, { model: shape, horizon, updateRows: startRowCount(shape), corrections: true }) : plain;
   // The history's cells, from the first start-table actual that still refers to one.
   let source: HistorySource | undefined;
   for (let t = 0; t < shape.startWindow && !source; t++) source = parseSourceFormula(read(g.start.first + t, g.start.cols.actual!).formula, t);
   const history: (number | null)[] = [];
+  const corrections: (number | null)[] = [];
+  const reasons: string[] = [];
+  let correctionSource: HistorySource | undefined;
+  let reasonSource: HistorySource | undefined;
   const asNumber = (v: number | string | null) => (typeof v === "number" ? v : null);
-  for (let t = 0; t < shape.startWindow; t++) history.push(asNumber(read(g.start.first + t, g.start.cols.written!).value));
+  // One period's record: its written actual, and on a corrected ledger its written correction and reason.
+  const take = (row: number, cols: { written?: number; correction?: number; reason?: number; correctionWritten?: number }, t: number) => {
+    history.push(asNumber(read(row, cols.written!).value));
+    if (!corrected) return;
+    corrections.push(asNumber(read(row, cols.correctionWritten!).value));
+    const reason = read(row, cols.reason!);
+    reasons.push(typeof reason.value === "string" ? reason.value : reason.value === null ? "" : String(reason.value));
+    correctionSource ??= parseSourceFormula(read(row, cols.correction!).formula, t);
+    reasonSource ??= parseReasonFormula(reason.formula, t);
+  };
+  for (let t = 0; t < shape.startWindow; t++) take(g.start.first + t, g.start.cols, t);
   // Down the period column until it ends (or stops counting on).
   let lastRow = g.updates.firstUpdate - 1;
   for (let r = g.updates.firstUpdate, t = shape.firstUpdate; r < MAX_ROWS; r++, t++) {
     if (read(r, g.updates.cols.period!).value !== t + 1) break;
-    if (t >= shape.startWindow) history.push(asNumber(read(r, g.updates.cols.written!).value));
+    if (t >= shape.startWindow) take(r, g.updates.cols, t);
     lastRow = r;
   }
   const num = (v: number | string | null) => (typeof v === "number" ? v : undefined);
@@ -92,6 +110,9 @@ export function readLedger(read: LedgerReader, anchor: LedgerAnchor): ReadLedger
     anchor: { sheet: anchor.sheet, cell: anchor.cell },
     tag: tagMatch[1],
     ...(source ? { source } : {}),
+    ...(corrected
+      ? { corrections: { values: corrections, reasons, ...(correctionSource ? { source: correctionSource } : {}), ...(reasonSource ? { reasonSource } : {}) } }
+      : {}),
   };
   return { input, shape, geometry: g, inUse, written, settingCells, lastRow };
 }

@@ -148,7 +148,18 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
         } else if (normaliseFormula(found.formula) !== normaliseFormula(cell.formula!)) {
           add("formula-changed", cell.formula!, `This actual should refer to its history cell ${cell.source}; Ebb wrote ${cell.formula}.`);
         } else if (!sameConstant(found.value, cell.value)) {
+          const what = cell.col === expected.layout.updates.columns.correction || cell.col === expected.layout.start.columns.correction ? "correction" : "history";
+          if (what === "correction") {
+            add("source-changed", cell.value, `The correction cell ${cell.source} now holds ${show(found.value)}; the ledger was written with ${show(cell.value)} and now computes with the new figure. If the change is right, write the ledger again so its record and check follow it.`);
+            break;
+          }
           add("source-changed", cell.value, `The history cell ${cell.source} now holds ${show(found.value)}; the ledger was written from ${show(cell.value)} and now computes with the new figure. If the correction is right, write the ledger again so its record and check follow it.`);
+        }
+        break;
+      case "reason":
+        // The words are the planner's; a reason that refers to the reasons column must keep referring to it.
+        if (cell.formula !== undefined && (found.formula === undefined || normaliseFormula(found.formula) !== normaliseFormula(cell.formula))) {
+          add("formula-changed", cell.formula, `This reason should refer to its cell ${cell.source} (${cell.formula}); it now holds ${show(found.formula ?? found.value)}. Write the reference back, or type the reason beside the correction.`);
         }
         break;
       case "setting":

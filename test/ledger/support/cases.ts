@@ -1,6 +1,6 @@
 import { readFileSync } from "fs";
 import { DEMO_CSV_PATH, mulberry32 } from "../../../src/preview/demo/generate-demo";
-import type { LedgerSettings } from "../../../src/ledger";
+import type { LedgerCorrections, LedgerSettings } from "../../../src/ledger";
 
 /** Test histories: the invented Larkmere demo data (monthly, 2019-2025) and small made-up series. */
 export function demoColumns(): { name: string; values: (number | null)[] }[] {
@@ -35,6 +35,19 @@ export interface LedgerCase {
   label: string;
   history: (number | null)[];
   settings: LedgerSettings;
+  /** Planner corrections beside the history (the ledger then shows correction, reason and value used). */
+  corrections?: LedgerCorrections;
+}
+
+/** Invented corrections: each [period index, figure, reason] on a history of n periods. */
+export function correctionsAt(n: number, entries: [number, number, string][]): LedgerCorrections {
+  const values: (number | null)[] = new Array(n).fill(null);
+  const reasons: (string | null)[] = new Array(n).fill(null);
+  for (const [t, v, why] of entries) {
+    values[t] = v;
+    reasons[t] = why;
+  }
+  return { values, reasons };
 }
 
 /** Both seasonalities (plus none), all trends, both starts; missing values; odd period; 3 start seasons. */
@@ -55,6 +68,31 @@ export function ledgerCases(): LedgerCase[] {
     cases.push({ label: `no season ${trend} decomposition`, history: seed.slice(0, 30), settings: { period: 1, trend, start: "decomposition" } });
     cases.push({ label: `no season ${trend} classic`, history: seed.slice(0, 30), settings: { period: 1, trend, start: "classic" } });
   }
+  // Corrections in the start window and after it, one filling a gap, one on a ledger without seasons.
+  cases.push({
+    label: "seed trays corrected multiplicative linear",
+    history: seed,
+    settings: { period: 12, seasonality: "multiplicative", trend: "linear" },
+    corrections: correctionsAt(seed.length, [[2, 300, "invented promotion"], [50, 520, "invented stock-out"]]),
+  });
+  cases.push({
+    label: "seed trays corrected additive damped classic",
+    history: seed,
+    settings: { period: 12, seasonality: "additive", trend: "damped", start: "classic" },
+    corrections: correctionsAt(seed.length, [[15, 410, "invented one-off order"], [44, 610, ""]]),
+  });
+  cases.push({
+    label: "margin corrected additive gap filled",
+    history: quarterlyMargin(),
+    settings: { period: 4, seasonality: "additive", trend: "linear" },
+    corrections: correctionsAt(40, [[21, 30, "invented: figure found later"], [30, 20, "invented correction"]]),
+  });
+  cases.push({
+    label: "no season corrected classic",
+    history: seed.slice(0, 30),
+    settings: { period: 1, trend: "linear", start: "classic" },
+    corrections: correctionsAt(30, [[1, 200, "invented promotion"], [20, 250, "invented"]]),
+  });
   cases.push({ label: "workdays odd period multiplicative classic", history: workdays(), settings: { period: 5, seasonality: "multiplicative", trend: "linear", start: "classic" } });
   cases.push({ label: "workdays odd period additive 3 seasons", history: workdays(), settings: { period: 5, seasonality: "additive", trend: "damped", cycles: 3 } });
   return cases;
@@ -73,4 +111,15 @@ export function longSeries(n: number, seed = 7): (number | null)[] {
   }
   for (let k = 1; k <= 3; k++) out[Math.floor((n * k) / 4)] = null;
   return out;
+}
+
+/**
+ * The values a corrected case's models run on: the correction where there is one, else the
+ * actual (the definition of a correction in the issue, computed here without the engine).
+ */
+export function usedValues(c: LedgerCase): (number | null)[] {
+  if (!c.corrections) return c.history;
+  const corr = Array.from(c.corrections.values);
+  const n = Math.max(c.history.length, corr.length);
+  return Array.from({ length: n }, (_, i) => corr[i] ?? c.history[i] ?? null);
 }
