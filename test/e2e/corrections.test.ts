@@ -41,4 +41,40 @@ describeWithChromium("preview Corrections sheet in Chromium", () => {
     await page.click(`td[data-cell="C${row}"]`);
     await page.screenshot({ path: join(ARTIFACTS, "preview-corrections.png") });
   });
+
+  test("a ledger written with the corrections and reasons columns shows and uses them, and checks clean", async () => {
+    await session.page().setViewportSize({ width: 1400, height: 900 });
+    const page = await session.open();
+    const product = DEMO_EVENTS[0].product;
+    const k = demoColumns().findIndex((c) => c.name === product);
+    await page.click(`th.col-head[data-col="${1 + k}"]`);
+    await page.click("#ebb-pick");
+    await page.fill("#ebb-corrections-column", `${CORRECTIONS_SHEET}!C`);
+    await page.fill("#ebb-reasons-column", `${CORRECTIONS_SHEET}!D`);
+    await page.click("#ebb-write");
+    await page.waitForFunction(() => !document.querySelector(".ebb-panel")!.hasAttribute("aria-busy"));
+    expect(await page.textContent("#ebb-message")).toMatch(/^Wrote the ledger for/);
+    const layout = await page.evaluate(() => {
+      const d = (window as unknown as { ebbPreview: { port: { lastLedger: { layout: unknown } } } }).ebbPreview.port.lastLedger;
+      return d.layout as { scorecard: Record<string, string>; updates: { columns: Record<string, number>; rows: { period: number; row: number }[] } };
+    });
+    const cell = (a: string) => page.$eval(`td[data-cell="${a}"]`, (td) => ({ text: td.textContent ?? "", value: (td as HTMLElement).dataset.value ?? null }));
+    const letter = (c: number) => String.fromCharCode(65 + c);
+    const months = demoMonths();
+    const hose = demoColumns()[k].values;
+    const stockOut = DEMO_EVENTS.find((e) => e.kind !== "promotion")!;
+    const t = months.indexOf(stockOut.month);
+    const r = layout.updates.rows.find((x) => x.period === t + 1)!.row + 1;
+    const c = layout.updates.columns;
+    expect(Number((await cell(`${letter(c.actual)}${r}`)).value)).toBe(hose[t]);
+    expect(Number((await cell(`${letter(c.correction)}${r}`)).value)).toBe(DEMO_CORRECTIONS[stockOut.month]);
+    expect((await cell(`${letter(c.reason)}${r}`)).text).toBe(stockOut.reason);
+    expect(Number((await cell(`${letter(c.used)}${r}`)).value)).toBe(DEMO_CORRECTIONS[stockOut.month]);
+    expect(Number((await cell(layout.scorecard.corrected)).value)).toBe(Object.keys(DEMO_CORRECTIONS).length);
+    await page.click(`td[data-cell="${letter(c.used)}${r}"]`);
+    await page.screenshot({ path: join(ARTIFACTS, "preview-ledger-corrections.png") });
+    await page.click("#ebb-verify");
+    await page.waitForFunction(() => !document.querySelector(".ebb-panel")!.hasAttribute("aria-busy"));
+    expect(await page.textContent("#ebb-message")).toMatch(/^All \d+ cells of the ledger on .* match the engine\./);
+  });
 });

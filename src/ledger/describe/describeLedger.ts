@@ -66,6 +66,8 @@ export function describeLedger(input: LedgerInput): LedgerDescription {
   const widths: Record<number, number> = {};
   for (let c = c0; c < c0 + g.width; c++) widths[c] = 13;
   widths[c0] = 18;
+  // Reasons are sentences: room to read them.
+  if (g.updates.cols.reason !== undefined) widths[g.updates.cols.reason] = 34;
   const heights: Record<number, number> = {};
   for (const c of cells.all()) if (c.role === "header" && String(c.value).length > 12) heights[c.row] = 30;
   return {

@@ -26,6 +26,8 @@ export interface PanelView {
   toArea: HTMLInputElement;
   sheetName: HTMLInputElement;
   areaCell: HTMLInputElement;
+  correctionsColumn: HTMLInputElement;
+  reasonsColumn: HTMLInputElement;
   useSelectedCell: HTMLButtonElement;
   write: HTMLButtonElement;
   ledgerList: HTMLSelectElement;
@@ -119,11 +121,27 @@ export function buildPanelView(): PanelView {
   const areaCell = input("ebb-area-cell", { placeholder: "for example Sheet1!H2", disabled: true });
   const useSelectedCell = el("button", { type: "button", id: "ebb-use-cell", class: "ebb-button small", text: "Use the selected cell", disabled: true });
 
+  const correctionsColumn = input("ebb-corrections-column", { placeholder: "optional, for example Corrections!C" });
+  const reasonsColumn = input("ebb-reasons-column", { placeholder: "optional, for example Corrections!D" });
+  const correctionsHint = el("p", {
+    class: "ebb-hint",
+    text: "Corrections sit beside the actuals, row for row: a figure replaces the actual in the updates (the ledger shows both, with the reason); a blank keeps the actual.",
+  });
+
   const write = el("button", { type: "submit", id: "ebb-write", class: "ebb-button primary", text: ACTIONS.write });
   const form = el(
     "form",
     { class: "ebb-form", novalidate: true },
-    el("fieldset", {}, el("legend", { text: "1  History" }), pick, historySummary),
+    el(
+      "fieldset",
+      {},
+      el("legend", { text: "1  History" }),
+      pick,
+      historySummary,
+      field("Corrections column", correctionsColumn),
+      field("Reasons column", reasonsColumn),
+      correctionsHint,
+    ),
     el(
       "fieldset",
       {},
@@ -217,6 +235,8 @@ export function buildPanelView(): PanelView {
     toArea,
     sheetName,
     areaCell,
+    correctionsColumn,
+    reasonsColumn,
     useSelectedCell,
     write,
     ledgerList,
@@ -251,5 +271,7 @@ export function formValues(v: PanelView): FormValues {
     destination: v.toArea.checked ? "area" : "new-sheet",
     sheetName: v.sheetName.value,
     areaCell: v.areaCell.value,
+    correctionsColumn: v.correctionsColumn.value,
+    reasonsColumn: v.reasonsColumn.value,
   };
 }

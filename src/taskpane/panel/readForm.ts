@@ -20,6 +20,9 @@ export interface FormValues {
   destination: "new-sheet" | "area";
   sheetName: string;
   areaCell: string;
+  /** Optional columns beside the history: corrections and their reasons (C, or Corrections!C). */
+  correctionsColumn?: string;
+  reasonsColumn?: string;
 }
 
 export interface FormSettings {

@@ -3,6 +3,7 @@ import { columnLetters } from "../../../ledger/describe/addresses";
 import { extendLedger, readLedger, type HistorySource } from "../../../ledger";
 import type { LedgerLocation } from "../../port";
 import { ask } from "../confirmStep";
+import { readCorrectionCells } from "../correctionColumns";
 import { pickHistories, type HistoryPick } from "../historyPick";
 import type { ActionContext } from "./actionContext";
 import { chooseHistory } from "./chooseHistory";
@@ -31,7 +32,18 @@ export async function addNewActuals(ctx: ActionContext): Promise<void> {
     ctx.say(`No new actuals below the history (the ledger already has ${known.length} periods). Type them under the last actual, then press the button again.`);
     return;
   }
-  const ext = extendLedger(read, { sheet: loc.sheet, cell: loc.cell }, added);
+  // A corrected ledger: the corrections (and reasons) typed beside the new actuals come along.
+  let newCorrections: { values: (number | null)[]; reasons?: string[] } | undefined;
+  const corr = input.corrections;
+  if (corr?.source) {
+    const got = await readCorrectionCells(ctx.port, corr.source, corr.reasonSource, known.length, added.length);
+    if (!got.ok) {
+      ctx.say(got.message, "error");
+      return;
+    }
+    newCorrections = { values: Array.from(got.corrections!.values, (v) => v ?? null), reasons: Array.from(got.corrections!.reasons ?? [], (r) => r ?? "") };
+  }
+  const ext = extendLedger(read, { sheet: loc.sheet, cell: loc.cell }, added, newCorrections);
   if (!(await clearToWrite(ctx, ext.sheet, [boundingRange(ext.append)], "the new ledger rows"))) {
     ctx.say("Nothing added.");
     return;

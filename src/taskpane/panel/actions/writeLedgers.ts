@@ -1,6 +1,7 @@
 /** "Write ledger": one ledger per chosen history, asking first before writing over anything. */
 import { defaultTag, describeLedger, uniqueTag, type LedgerDescription, type LedgerInput } from "../../../ledger";
 import { ask } from "../confirmStep";
+import { readCorrections } from "../correctionColumns";
 import { messageOf } from "../messages";
 import { formValues, type PanelView } from "../panelView";
 import { yieldToPage } from "../progress";
@@ -36,6 +37,12 @@ export async function writeLedgers(ctx: ActionContext): Promise<void> {
       return;
     }
   }
+  const correcting = (values.correctionsColumn ?? "").trim() !== "" || (values.reasonsColumn ?? "").trim() !== "";
+  if (correcting && ctx.picks.length > 1) {
+    ctx.say("A corrections column belongs to one history. Choose one column, or clear the corrections and reasons columns.", "error");
+    view.correctionsColumn.focus();
+    return;
+  }
   const written: LedgerDescription[] = [];
   const total = ctx.picks.length;
   for (let i = 0; i < total; i++) {
@@ -60,6 +67,15 @@ export async function writeLedgers(ctx: ActionContext): Promise<void> {
       // The actuals refer to the history's cells: a corrected history recomputes the ledger.
       source: { sheet: pick.sheet, col: pick.col, firstRow: pick.firstRow },
     };
+    if (correcting) {
+      const read = await readCorrections(port, pick, values.correctionsColumn ?? "", values.reasonsColumn ?? "", 0);
+      if (!read.ok) {
+        ctx.say(read.message, "error");
+        view.correctionsColumn.focus();
+        return;
+      }
+      if (read.corrections) input.corrections = read.corrections;
+    }
     let desc: LedgerDescription;
     try {
       desc = describeLedger(input);
@@ -114,6 +130,13 @@ function wroteMessage(d: LedgerDescription): string {
   if (d.spec.trend === "damped") parts.push(`phi ${fourDecimals(k.phi)}`);
   return (
     `Wrote the ledger for "${d.name}" on the sheet "${d.sheet}" from ${d.anchor}: ${d.spec.seasonality} seasonality, ${d.spec.trend} trend, ` +
-    `season length ${d.spec.period}; ${parts.join(", ")}. Change alpha or another setting in its yellow cells and every row recomputes.`
+    `season length ${d.spec.period}; ${parts.join(", ")}.${correctedNote(d)} Change alpha or another setting in its yellow cells and every row recomputes.`
   );
+}
+
+/** On a corrected ledger: how many periods the updates take from the corrections column. */
+function correctedNote(d: LedgerDescription): string {
+  if (!d.corrections) return "";
+  const n = d.corrections.values.filter((v) => v !== null).length;
+  return ` ${n} period${n === 1 ? "" : "s"} corrected: the updates use the correction, and the Actual column keeps the recorded figure.`;
 }
