@@ -2,7 +2,8 @@
  * The preview grid behaves like a spreadsheet where a planner expects it to, in Debian's
  * Chromium: shift-click on column headers selects every column between (common practice in
  * spreadsheets), and a spilled block blocked by a typed cell names that cell and comes back
- * as soon as the cell is cleared.
+ * as soon as the cell is cleared; Ctrl+Z and Ctrl+Y undo and redo edits, a cleared selection
+ * and a ledger written by the panel, each as one step (common practice in spreadsheets).
  */
 import { join } from "path";
 import type { Page } from "playwright-core";
@@ -52,7 +53,7 @@ describeWithChromium("the preview grid as a spreadsheet", () => {
 
   test("interval headers wrap in full, so low can be told from high (I19, J19)", async () => {
     const page = await session.open();
-    for (const [address, end] of [["I19", ": low"], ["J19", ": high"], ["H4", "Months ahead"]]) {
+    for (const [address, end] of [["I19", ": low"], ["J19", ": high"], ["H4", "Month"]]) {
       const seen = await page.$eval(`td[data-cell="${address}"]`, (td) => ({
         text: td.textContent ?? "",
         cut: td.scrollWidth > td.clientWidth + 1 || td.scrollHeight > td.clientHeight + 1,
@@ -90,5 +91,43 @@ describeWithChromium("the preview grid as a spreadsheet", () => {
     await typeInto(page, "J6", "");
     expect(await shown(page, "I5")).not.toBe("#SPILL!");
     expect(await page.getAttribute('td[data-cell="I5"]', "data-value")).toBe(before);
+  });
+
+  test("Ctrl+Z undoes an edit, a cleared selection and a ledger write, one step each; Ctrl+Y redoes", async () => {
+    const page = await session.open();
+    const before = await shown(page, "B85");
+    const forecast = await shown(page, "I5");
+    await typeInto(page, "B85", "9999");
+    expect(await shown(page, "B85")).toMatch(/9,?999/);
+    expect(await shown(page, "I5")).not.toBe(forecast);
+    await page.click('td[data-cell="B85"]');
+    await page.keyboard.press("Control+z");
+    expect(await shown(page, "B85")).toBe(before);
+    expect(await shown(page, "I5")).toBe(forecast);
+    await page.keyboard.press("Control+y");
+    expect(await shown(page, "B85")).toMatch(/9,?999/);
+    await page.keyboard.press("Control+z");
+    // A selection of three rows cleared with Delete comes back with one Ctrl+Z.
+    const rows = await Promise.all(["B83", "B84", "B85"].map((a) => shown(page, a)));
+    await page.click('td[data-cell="B83"]');
+    await page.click('td[data-cell="B85"]', { modifiers: ["Shift"] });
+    await page.keyboard.press("Delete");
+    expect(await shown(page, "B84")).toBe("");
+    await page.keyboard.press("Control+z");
+    expect(await Promise.all(["B83", "B84", "B85"].map((a) => shown(page, a)))).toEqual(rows);
+    // A ledger written by the panel: one Ctrl+Z takes its sheet away, Ctrl+Y brings it back.
+    await page.click('th.col-head[data-col="1"]');
+    await page.click("#ebb-pick");
+    await page.click("#ebb-write");
+    await page.waitForFunction(() => !document.querySelector(".ebb-panel")!.hasAttribute("aria-busy"));
+    const tabs = () => page.$$eval("button.sheet-tab", (b) => b.map((x) => x.textContent ?? ""));
+    expect((await tabs()).some((t) => t.startsWith("Ledger"))).toBe(true);
+    await page.click('td[data-cell="A1"]');
+    await page.keyboard.press("Control+z");
+    await page.waitForFunction(() => !Array.from(document.querySelectorAll("button.sheet-tab")).some((b) => (b.textContent ?? "").startsWith("Ledger")));
+    await page.click('td[data-cell="A1"]');
+    await page.keyboard.press("Control+Shift+z");
+    await page.waitForFunction(() => Array.from(document.querySelectorAll("button.sheet-tab")).some((b) => (b.textContent ?? "").startsWith("Ledger")));
+    await page.screenshot({ path: join(ARTIFACTS, "preview-undo-redo.png") });
   });
 });

@@ -1,7 +1,7 @@
 /**
  * Mouse and keyboard on the grid: click, shift-click and drag select; a column header selects
  * its used part, and shift-click on another header stretches that to every column between;
- * keys move, stretch, clear or start an edit (see gridKeys for the mapping).
+ * keys move, stretch, clear, undo and redo or start an edit (see gridKeys for the mapping).
  */
 import type { PreviewWorkbook } from "../workbook/previewWorkbook";
 import type { CellEditor } from "./cellEditor";
@@ -82,6 +82,11 @@ function onKey(parts: GridInputParts, e: KeyboardEvent): void {
       e.preventDefault();
       selectColumn(parts, state.sel.active.col);
       break;
+    case "undo":
+    case "redo":
+      e.preventDefault();
+      if (!(action.type === "undo" ? parts.workbook.undo() : parts.workbook.redo())) parts.events.editRefused(action.type === "undo" ? "Nothing to undo." : "Nothing to redo.");
+      break;
   }
 }
 
@@ -96,6 +101,11 @@ function selectColumn(parts: GridInputParts, col: number, extend = false): void 
 }
 
 function clearSelection(parts: GridInputParts): void {
+  // One step: Ctrl+Z brings the whole selection back.
+  parts.workbook.step(() => clearCells(parts));
+}
+
+function clearCells(parts: GridInputParts): void {
   const { workbook, state, events } = parts;
   const r = rectOf(state.sel);
   for (let row = r.top; row <= r.bottom; row++) {

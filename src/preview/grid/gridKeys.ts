@@ -5,6 +5,8 @@ export type GridAction =
   | { type: "edit"; initial?: string }
   | { type: "clear" }
   | { type: "select-column" }
+  | { type: "undo" }
+  | { type: "redo" }
   | { type: "none" };
 
 export interface KeyLike {
@@ -43,6 +45,12 @@ export function gridAction(e: KeyLike): GridAction {
     case " ":
       if (e.ctrlKey) return { type: "select-column" };
       break;
+  }
+  // Ctrl+Z undoes the last step (an edit, a clear, a write of the panel); Ctrl+Y or Ctrl+Shift+Z redoes it (Cmd on a Mac).
+  if ((e.ctrlKey || e.metaKey) && !e.altKey) {
+    const k = e.key.toLowerCase();
+    if (k === "z") return { type: e.shiftKey ? "redo" : "undo" };
+    if (k === "y") return { type: "redo" };
   }
   if (e.key.length === 1 && !e.ctrlKey && !e.metaKey && !e.altKey) return { type: "edit", initial: e.key };
   return { type: "none" };

@@ -62,12 +62,17 @@ export class PreviewPort implements WorkbookPort {
   }
 
   async firstUsedCell(sheet: string, ranges: string[]): Promise<string | undefined> {
-    const used = await this.usedCells(sheet, ranges);
+    const used = this.usedCells(sheet, ranges);
     return used.length ? `${sheet}!${a1(used[0].row, used[0].col)}` : undefined;
   }
 
   async writeLedger(ledger: LedgerDescription, confirmed: boolean): Promise<WriteOutcome> {
-    const used = await this.usedCells(ledger.sheet, ledger.footprint);
+    // One undo step: clearing the area, the sheet, its names and cells.
+    return this.workbook.step(() => this.writeLedgerNow(ledger, confirmed));
+  }
+
+  private writeLedgerNow(ledger: LedgerDescription, confirmed: boolean): WriteOutcome {
+    const used = this.usedCells(ledger.sheet, ledger.footprint);
     // Names of this tag belong to a ledger already: writing would point them here.
     const prefix = `ebb_${ledger.tag}_`.toLowerCase();
     const existingNames = this.workbook.hf.listNamedExpressions().filter((n) => n.toLowerCase().startsWith(prefix));
@@ -98,13 +103,13 @@ export class PreviewPort implements WorkbookPort {
   async writeExtension(ext: LedgerExtension): Promise<void> {
     const cells = [...ext.append, ...ext.refresh];
     this.decor.addCells(ext.sheet, cells);
-    writeCellsToHyperFormula(this.workbook.hf, ext.sheet, cells, ext.names);
+    this.workbook.step(() => writeCellsToHyperFormula(this.workbook.hf, ext.sheet, cells, ext.names));
     this.lastLedger = ext.description;
   }
 
   async writeCells(sheet: string, cells: LedgerCell[]): Promise<void> {
     this.decor.addCells(sheet, cells);
-    writeCellsToHyperFormula(this.workbook.hf, sheet, cells);
+    this.workbook.step(() => writeCellsToHyperFormula(this.workbook.hf, sheet, cells));
   }
 
   async reader(sheet: string, _anchorCell: string): Promise<LedgerReader> {
@@ -112,7 +117,7 @@ export class PreviewPort implements WorkbookPort {
   }
 
   /** Cells holding anything (a value or a formula) inside A1 ranges of a sheet. */
-  private async usedCells(sheet: string, ranges: string[]): Promise<{ row: number; col: number }[]> {
+  private usedCells(sheet: string, ranges: string[]): { row: number; col: number }[] {
     if (!this.workbook.sheetNames().includes(sheet)) return [];
     const size = this.workbook.size(sheet);
     const out: { row: number; col: number }[] = [];

@@ -10,6 +10,7 @@ import { columnLetters } from "./addresses";
 import { parseCsv } from "./csvText";
 import { CAUTIONS } from "../../taskpane/panel/cautions";
 import { DEMO_EVENTS } from "../demo/events";
+import { firstOutlookMonth, nextMonth } from "./outlookMonths";
 import { buildCorrectionsSheet, CORRECTIONS_SHEET } from "./correctionsSheet";
 
 export const SALES_SHEET = "Sales";
@@ -95,18 +96,24 @@ export function buildDemoWorkbook(csvText: string, notice: string): DemoWorkbook
   const nameRef = (k: number): string => `=${columnLetters(1 + k)}1`;
   const v = (k: number): number => L.firstValueCol + k;
 
+  // The outlook's rows are labelled with the months they cover, rolling on with each new actual.
+  const putMonths = (firstRow: number): void => {
+    put(firstRow, L.labelCol, firstOutlookMonth(productCount, HISTORY_LAST_ROW));
+    for (let h = 2; h <= DEMO_HORIZON; h++) put(firstRow + h - 1, L.labelCol, nextMonth(`${columnLetters(L.labelCol)}${firstRow + h - 1}`));
+  };
+
   // The page's header says "invented data" once for the whole preview; the sheet carries the cautions.
   put(L.noticeRow, L.labelCol, CAUTIONS);
 
   put(L.aheadTitleRow, L.labelCol, `Next ${DEMO_HORIZON} months: forecast from the latest actuals (EBB.AHEAD, one formula for all products)`);
-  put(L.aheadHeadRow, L.labelCol, "Months ahead");
+  put(L.aheadHeadRow, L.labelCol, "Month");
   for (let k = 0; k < productCount; k++) put(L.aheadHeadRow, v(k), nameRef(k));
-  for (let h = 1; h <= DEMO_HORIZON; h++) put(L.aheadFirstRow + h - 1, L.labelCol, h);
+  putMonths(L.aheadFirstRow);
   put(L.aheadFirstRow, L.firstValueCol, `=EBB.AHEAD(${all}, ${DEMO_PERIOD}, ${DEMO_HORIZON})`);
 
   put(L.bandTitleRow, L.labelCol, "95% prediction interval: low and high for each product (EBB.BAND, one formula)");
-  put(L.bandHeadRow, L.labelCol, "Months ahead");
-  for (let h = 1; h <= DEMO_HORIZON; h++) put(L.bandFirstRow + h - 1, L.labelCol, h);
+  put(L.bandHeadRow, L.labelCol, "Month");
+  putMonths(L.bandFirstRow);
   for (let k = 0; k < productCount; k++) {
     const col = columnLetters(1 + k);
     put(L.bandHeadRow, v(2 * k), `=${col}1&": low"`);

@@ -48,12 +48,17 @@ interface ArrayVertexLike {
  */
 interface EngineInternals {
   _lazilyTransformingAstService?: unknown;
-  _crudOperations?: { operations?: { arraySizePredictor?: { checkArraySize(ast: unknown, at: SimpleCellAddress): { width: number; height: number } } } };
+  _crudOperations?: { undoRedo?: { undoStack?: unknown[]; redoStack?: unknown[] }; operations?: { arraySizePredictor?: { checkArraySize(ast: unknown, at: SimpleCellAddress): { width: number; height: number } } } };
 }
 
 export class PreviewWorkbook {
   private readonly listeners = new Set<Listener>();
   private readonly sizes = new Map<string, { rows: number; cols: number }>();
+  /** Steps for Ctrl+Z and Ctrl+Y: how many of the engine's undo entries each user step made. */
+  private readonly done: number[] = [];
+  private readonly undone: number[] = [];
+  private stepDepth = 0;
+  private knownDepth = 0;
 
   constructor(readonly hf: HyperFormula) {
     const notify = (): void => {
@@ -64,6 +69,68 @@ export class PreviewWorkbook {
     hf.on("sheetAdded", notify);
     hf.on("sheetRemoved", notify);
     hf.on("sheetRenamed", notify);
+    // The workbook as opened is where undo stops.
+    hf.clearUndoStack();
+    hf.clearRedoStack();
+  }
+
+  /**
+   * Run one user step (an edit, a cleared selection, one write of the panel): however many
+   * engine operations it takes (a cell, then the blocked results that spill again; a sheet, its
+   * names and cells), Ctrl+Z undoes it whole. Steps nest: the outermost one counts.
+   */
+  step<T>(fn: () => T): T {
+    if (this.stepDepth === 0) this.absorbUntracked();
+    this.stepDepth++;
+    try {
+      return fn();
+    } finally {
+      this.stepDepth--;
+      if (this.stepDepth === 0) {
+        const made = this.undoDepth() - this.knownDepth;
+        if (made > 0) {
+          this.done.push(made);
+          this.undone.length = 0;
+        }
+        this.knownDepth = this.undoDepth();
+      }
+    }
+  }
+
+  /** Undo the last user step; false when there is none. */
+  undo(): boolean {
+    this.absorbUntracked();
+    const n = this.done.pop();
+    if (n === undefined) return false;
+    for (let i = 0; i < n && this.hf.isThereSomethingToUndo(); i++) this.hf.undo();
+    this.undone.push(n);
+    this.knownDepth = this.undoDepth();
+    return true;
+  }
+
+  /** Redo the last undone step; false when there is none. */
+  redo(): boolean {
+    const n = this.undone.pop();
+    if (n === undefined) return false;
+    for (let i = 0; i < n && this.hf.isThereSomethingToRedo(); i++) this.hf.redo();
+    this.done.push(n);
+    this.knownDepth = this.undoDepth();
+    return true;
+  }
+
+  /** Changes made outside a step (none are expected) become a step of their own, so counts stay right. */
+  private absorbUntracked(): void {
+    const extra = this.undoDepth() - this.knownDepth;
+    if (extra > 0) {
+      this.done.push(extra);
+      this.undone.length = 0;
+    }
+    this.knownDepth = this.undoDepth();
+  }
+
+  /** Entries on the engine's undo stack (its public API has only "is there something to undo"). */
+  private undoDepth(): number {
+    return (this.hf as unknown as EngineInternals)._crudOperations?.undoRedo?.undoStack?.length ?? 0;
   }
 
   /** Called after any change of values or sheets (edits, the panel's writes). */
@@ -155,8 +222,10 @@ export class PreviewWorkbook {
       return { ok: false, message: `${a1(row, col)} cannot be changed here.` };
     }
     try {
-      this.hf.setCellContents(address, [[parseInput(text)]]);
-      if (respill) this.respillCleared(sheet);
+      this.step(() => {
+        this.hf.setCellContents(address, [[parseInput(text)]]);
+        if (respill) this.respillCleared(sheet);
+      });
       return { ok: true };
     } catch (e) {
       return { ok: false, message: `${a1(row, col)} was not changed: ${e instanceof Error ? e.message : String(e)}` };

@@ -121,11 +121,11 @@ export function buildPanelView(): PanelView {
   const areaCell = input("ebb-area-cell", { placeholder: "for example Sheet1!H2", disabled: true });
   const useSelectedCell = el("button", { type: "button", id: "ebb-use-cell", class: "ebb-button small", text: "Use the selected cell", disabled: true });
 
-  const correctionsColumn = input("ebb-corrections-column", { placeholder: "optional, for example Corrections!C" });
-  const reasonsColumn = input("ebb-reasons-column", { placeholder: "optional, for example Corrections!D" });
+  const correctionsColumn = input("ebb-corrections-column", { placeholder: "optional" });
+  const reasonsColumn = input("ebb-reasons-column", { placeholder: "optional" });
   const correctionsHint = el("p", {
     class: "ebb-hint",
-    text: "Corrections sit beside the actuals, row for row: a figure replaces the actual in the updates (the ledger shows both, with the reason); a blank keeps the actual.",
+    text: "Type a column such as C or Corrections!C. Corrections sit beside the actuals, row for row: a figure replaces the actual in the updates (the ledger shows both, with the reason); a blank keeps the actual.",
   });
 
   const write = el("button", { type: "submit", id: "ebb-write", class: "ebb-button primary", text: ACTIONS.write });
