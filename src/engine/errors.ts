@@ -5,20 +5,29 @@
  */
 export type EbbErrorKind = "value" | "na";
 
+/** Where in an input an error lies: the 0-based position in the series, and which input ("history" unless said). */
+export interface ErrorPlace {
+  index: number;
+  argument?: string;
+}
+
 export class EbbError extends Error {
   readonly kind: EbbErrorKind;
   readonly code: string;
-  constructor(kind: EbbErrorKind, code: string, message: string) {
+  /** The input cell the message is about, so a host that knows the range can name its address. */
+  readonly at?: ErrorPlace;
+  constructor(kind: EbbErrorKind, code: string, message: string, at?: ErrorPlace) {
     super(message);
     this.name = "EbbError";
     this.kind = kind;
     this.code = code;
+    if (at) this.at = at;
   }
 }
 
 /** #VALUE!-class error: the input is wrong and must be changed. */
-export function badInput(code: string, message: string): EbbError {
-  return new EbbError("value", code, message);
+export function badInput(code: string, message: string, at?: ErrorPlace): EbbError {
+  return new EbbError("value", code, message, at);
 }
 
 /** #N/A-class error: more history is needed (the normal state of a rolling table's first rows). */

@@ -61,7 +61,7 @@ export function detectPeriod(y: ArrayLike<number>, maxPeriod = 24): number {
   for (let i = 0; i < y.length; i++) {
     const v = y[i];
     if (v === Infinity || v === -Infinity) {
-      throw badInput("not-finite", `The history holds an infinite value in cell ${i + 1}. Use finite numbers, or leave the cell blank for a missing value.`);
+      throw badInput("not-finite", `The history holds an infinite value in cell ${i + 1}. Use finite numbers, or leave the cell blank for a missing value.`, { index: i });
     }
   }
   let first = 0;

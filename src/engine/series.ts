@@ -13,7 +13,7 @@ export function cleanHistory(values: ArrayLike<number | null | undefined>): Floa
     const v = values[i];
     if (isMissing(v)) out[i] = NaN;
     else if (typeof v !== "number" || !Number.isFinite(v)) {
-      throw badInput("not-a-number", `Value ${i + 1} of the history is not a finite number. Replace it with a number or leave the cell blank.`);
+      throw badInput("not-a-number", `Value ${i + 1} of the history is not a finite number. Replace it with a number or leave the cell blank.`, { index: i });
     } else out[i] = v;
   }
   return out;
@@ -37,6 +37,7 @@ export function requirePositive(y: ArrayLike<number>): void {
       throw badInput(
         "non-positive",
         `Value ${i + 1} of the history is ${y[i]}: multiplicative seasonality needs every actual above 0. Use additive seasonality, or correct the value.`,
+        { index: i },
       );
     }
   }

@@ -9,6 +9,7 @@
 import { badInput, EbbError } from "../engine";
 import { InputError } from "./cells";
 import { basicValueOf } from "./dataTypes";
+import { addressIn } from "./places";
 
 /** Longest history (values up to the last one present) a worksheet function takes per series. */
 export const MAX_SERIES_LENGTH = 20000;
@@ -44,13 +45,13 @@ export function readSeries(value: unknown, name: string, blanksAllowed = false):
   const range = readRange(value, name);
   const rows = range.length;
   const cols = range[0].length;
-  const read = (cells: unknown[], label: string): SeriesInput | EbbError => {
-    const s = seriesOf(cells, label, (i) => `cell ${i + 1} of ${label}`);
+  const read = (cells: unknown[], label: string, column: number): SeriesInput | EbbError => {
+    const s = seriesOf(cells, label, (i) => addressIn(name, i, column) ?? `cell ${i + 1} of ${label}`);
     return blanksAllowed || s instanceof EbbError || s.values.some((v) => v !== null) ? s : noValuesYet(label);
   };
-  if (rows === 1 && cols > 1) return [read(range[0], name)];
+  if (rows === 1 && cols > 1) return [read(range[0], name, 0)];
   const out: (SeriesInput | EbbError)[] = [];
-  for (let c = 0; c < cols; c++) out.push(read(range.map((row) => row[c]), cols > 1 ? `column ${c + 1} of ${name}` : name));
+  for (let c = 0; c < cols; c++) out.push(read(range.map((row) => row[c]), cols > 1 ? `column ${c + 1} of ${name}` : name, c));
   return out;
 }
 

@@ -6,10 +6,15 @@ import { badInput, EbbError } from "../engine";
 import { type Output, finiteNumber, safeBlock } from "./cells";
 import type { FunctionSpec } from "./catalog";
 import { asEbbError } from "./failures";
+import { located, withPlaces, type ArgumentPlaces } from "./places";
 
 export type Outcome = { ok: true; value: Output } | { ok: false; error: EbbError };
 
-export function invoke(spec: FunctionSpec, args: unknown[]): Outcome {
+export function invoke(spec: FunctionSpec, args: unknown[], places?: ArgumentPlaces): Outcome {
+  return withPlaces(places, () => invokeHere(spec, args));
+}
+
+function invokeHere(spec: FunctionSpec, args: unknown[]): Outcome {
   try {
     if (args.length > spec.params.length) {
       throw badInput(
@@ -20,6 +25,6 @@ export function invoke(spec: FunctionSpec, args: unknown[]): Outcome {
     const value = spec.run(...spec.params.map((_, i) => args[i]));
     return { ok: true, value: typeof value === "number" ? finiteNumber(value, "result") : safeBlock(value) };
   } catch (e) {
-    return { ok: false, error: asEbbError(e) };
+    return { ok: false, error: located(asEbbError(e)) };
   }
 }

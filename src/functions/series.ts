@@ -8,6 +8,7 @@ import { EbbError } from "../engine";
 import { type Block, sideBySide } from "./cells";
 import type { SeriesInput } from "./coerce";
 import { asEbbError } from "./failures";
+import { located } from "./places";
 
 /**
  * @param inputs the series of a range (or the error that stopped one of them)
@@ -18,14 +19,19 @@ export function eachSeries(inputs: (SeriesInput | EbbError)[], width: number, co
   if (inputs.length === 1) {
     const only = inputs[0];
     if (only instanceof EbbError) throw only;
-    return compute(only, 0);
+    try {
+      return compute(only, 0);
+    } catch (e) {
+      throw located(asEbbError(e), 0);
+    }
   }
   const results: (Block | EbbError)[] = inputs.map((s, i) => {
     if (s instanceof EbbError) return s;
     try {
       return compute(s, i);
     } catch (e) {
-      return asEbbError(e);
+      // An error about one cell names it, in this series' column.
+      return located(asEbbError(e), i);
     }
   });
   const height = Math.max(1, ...results.map((r) => (r instanceof EbbError ? 1 : r.length)));

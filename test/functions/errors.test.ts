@@ -5,6 +5,7 @@
  * multiplicative seasonality, constants outside [0, 1]; #N/A for "not enough history yet".
  */
 import { readDemo } from "./support/demo";
+import { createEbbWorkbook } from "../../src/functions/hyperformula";
 import { block, type Cell, errorIn, gridFromColumns, workbook } from "./support/workbook";
 
 const seed = readDemo().columns[0].slice(0, 36) as Cell[];
@@ -36,14 +37,14 @@ const cases: Case[] = [
     formula: "=EBB.AHEAD(A1:A36, 12, 6)",
     history: withCell(4, "'123"),
     type: "VALUE",
-    message: /^Cell 5 of history is text "123", a number stored as text\. Retype it as a number/,
+    message: /^A5 is text "123", a number stored as text\. Retype it as a number/,
   },
   {
     what: "a word in the history",
     formula: "=EBB.FIT(A1:A36, 12)",
     history: withCell(6, "n/a"),
     type: "VALUE",
-    message: /^Cell 7 of history holds text "n\/a"\. Use numbers only; leave a cell blank for a missing value\.$/,
+    message: /^A7 holds text "n\/a"\. Use numbers only; leave a cell blank for a missing value\.$/,
   },
   {
     what: "a heading inside the range",
@@ -57,21 +58,21 @@ const cases: Case[] = [
     formula: "=EBB.STATES(A1:A36, 12)",
     history: withCell(2, true),
     type: "VALUE",
-    message: /^Cell 3 of history holds TRUE, not a number\./,
+    message: /^A3 holds TRUE, not a number\./,
   },
   {
     what: "an error value in the history",
     formula: "=EBB.AHEAD(A1:A36, 12, 6)",
     history: withCell(3, "=1/0"),
     type: "VALUE",
-    message: /^Cell 4 of history holds the error #DIV\/0!\. Fix that cell/,
+    message: /^A4 holds the error #DIV\/0!\. Fix that cell/,
   },
   {
     what: "#N/A in the history stays #N/A",
     formula: "=EBB.AHEAD(A1:A36, 12, 6)",
     history: withCell(3, "=NA()"),
     type: "NA",
-    message: /^Cell 4 of history holds the error #N\/A\./,
+    message: /^A4 holds the error #N\/A\./,
   },
   {
     what: "an unknown seasonality word lists the accepted words",
@@ -96,7 +97,8 @@ const cases: Case[] = [
     formula: "=EBB.AHEAD(A1:A36, 12, 6)",
     history: withCell(9, 0),
     type: "VALUE",
-    message: /multiplicative seasonality needs every actual above 0\. Use additive seasonality, or correct the value\./,
+    // The engine says which value; the formula engine knows the range, so the message names the cell.
+    message: /^A10: Value 10 of the history is 0: multiplicative seasonality needs every actual above 0\. Use additive seasonality, or correct the value\./,
   },
   {
     what: "a smoothing constant above 1",
@@ -203,7 +205,7 @@ const cases: Case[] = [
     formula: "=EBB.MAPE(A1:A3, A1:A3)",
     history: [5, 0, 7],
     type: "VALUE",
-    message: /^MAPE is undefined when an actual is 0 \(cell 2 of the actual range\)/,
+    message: /^A2: MAPE is undefined when an actual is 0 \(cell 2 of the actual range\)/,
   },
   {
     what: "actual and forecast of different sizes",
@@ -261,7 +263,7 @@ test("in a block, a bad cell fails only its own column, and the message names th
   expect(out.every((r) => typeof r[0] === "number")).toBe(true);
   const e = errorIn(w.hf, w.sheet, "E1");
   expect(e.type).toBe("VALUE");
-  expect(e.message).toMatch(/^Cell 5 of column 2 of history is text "123", a number stored as text\./);
+  expect(e.message).toMatch(/^B5 is text "123", a number stored as text\./);
 });
 
 test("EBB.ACCURACY shows an undefined measure as that cell's error and keeps the others", () => {
@@ -271,4 +273,11 @@ test("EBB.ACCURACY shows an undefined measure as that cell's error and keeps the
   expect(mape).toBeGreaterThan(0);
   expect(errorIn(w.hf, w.sheet, `E${mape + 1}`).message).toMatch(/^MAPE is undefined when an actual is 0/);
   expect(typeof rows[0][1]).toBe("number");
+});
+
+test("a history on another sheet is named with its sheet: Sales!B86", () => {
+  const hf = createEbbWorkbook({ Sales: gridFromColumns([[], [...seed.slice(0, 30), "oops", ...seed.slice(31)]], 36) as never, Plan: [["=EBB.AHEAD(Sales!B1:B36, 12, 6)"]] }, { smartRounding: false });
+  const e = errorIn(hf, hf.getSheetId("Plan")!, "A1");
+  expect(e.type).toBe("VALUE");
+  expect(e.message).toMatch(/^Sales!B31 holds text "oops"\./);
 });

@@ -86,7 +86,7 @@ export function forecastValueAdded(
     const f = [actual[t - period], model[t], adjusted[t]];
     if (a !== a || f.some((v) => v !== v)) continue;
     if (measure === "mape" && a === 0) {
-      throw badInput("mape-zero-actual", `MAPE is undefined: the actual in cell ${t + 1} is 0. Use MAD or MASE for series with zero sales.`);
+      throw badInput("mape-zero-actual", `MAPE is undefined: the actual in cell ${t + 1} is 0. Use MAD or MASE for series with zero sales.`, { index: t, argument: "actual" });
     }
     actuals.push(a);
     f.forEach((v, i) => errors[i].push(a - v));

@@ -29,6 +29,7 @@ export function mape(actual: ArrayLike<number>, forecast: ArrayLike<number>): nu
       throw badInput(
         "mape-zero-actual",
         `MAPE is undefined when an actual is 0 (cell ${p.position[i] + 1} of the actual range): it divides by the actual. Use sMAPE or MAD for this series instead.`,
+        { index: p.position[i], argument: "actual" },
       );
     }
     s += Math.abs((y - p.forecast[i]) / y);

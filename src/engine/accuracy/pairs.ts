@@ -21,10 +21,10 @@ export function checkFinite(values: ArrayLike<number>, label: string): void {
   for (let i = 0; i < values.length; i++) {
     const v = values[i];
     if (v === Infinity || v === -Infinity) {
-      throw badInput("not-finite", `The ${label} range holds an infinite value in cell ${i + 1}. Use finite numbers, or leave the cell blank for a missing value.`);
+      throw badInput("not-finite", `The ${label} range holds an infinite value in cell ${i + 1}. Use finite numbers, or leave the cell blank for a missing value.`, { index: i, argument: label });
     }
     if (typeof v !== "number") {
-      throw badInput("not-a-number", `The ${label} range holds a non-number in cell ${i + 1}. Use numbers, or leave the cell blank for a missing value.`);
+      throw badInput("not-a-number", `The ${label} range holds a non-number in cell ${i + 1}. Use numbers, or leave the cell blank for a missing value.`, { index: i, argument: label });
     }
   }
 }

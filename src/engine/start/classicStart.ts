@@ -27,7 +27,7 @@ export function classicStart(y: Float64Array, p: number, seasonality: Seasonalit
   if (y.length < window + 1) throw notEnough(window + 1, y.length);
   for (let t = 0; t < window; t++) {
     if (Number.isNaN(y[t])) {
-      throw badInput("start-gap", `The classic start needs the first ${window} values complete; value ${t + 1} is blank. Fill it or use the decomposition start.`);
+      throw badInput("start-gap", `The classic start needs the first ${window} values complete; value ${t + 1} is blank. Fill it or use the decomposition start.`, { index: t });
     }
   }
   const dec = classicalIndices(y.subarray(0, window), p, seasonality);

@@ -12,6 +12,7 @@ import { ArraySize, FunctionArgumentType, FunctionPlugin, type ImplementedFuncti
 import { badInput } from "../../engine";
 import { type ArgShape, CATALOG, type FunctionSpec, NAMESPACE } from "../catalog";
 import { invoke } from "../invoke";
+import type { ArgumentPlaces } from "../places";
 import { argumentIn, blockOut, errorOut } from "./values";
 
 /** The parts of the engine's syntax tree read here (the types are not exported by the package). */
@@ -19,6 +20,16 @@ interface Node {
   type: string;
   value?: unknown;
   expression?: Node;
+  /** CELL_RANGE: its corners; CELL_REFERENCE: the cell (relative to the formula's cell). */
+  start?: CellAddressNode;
+  end?: CellAddressNode;
+  reference?: CellAddressNode;
+}
+interface CellAddressNode {
+  toSimpleCellAddress(base: { sheet: number; row: number; col: number }): { sheet: number; row: number; col: number };
+}
+interface SheetNames {
+  dependencyGraph?: { sheetMapping?: { getSheetName(id: number): string | undefined } };
 }
 interface Call {
   args: Node[];
@@ -56,11 +67,31 @@ export class EbbFunctionPlugin extends FunctionPlugin {
     return { rows: Math.min(size.rows, this.config.maxRows), cols: Math.min(size.cols, this.config.maxColumns) };
   }
 
+  /** Where each range argument lies, so messages name the cell (B86) rather than a position. */
+  placesOf(spec: FunctionSpec, ast: Call, state: State): ArgumentPlaces {
+    const places: ArgumentPlaces = {};
+    const base = state.formulaAddress;
+    ast.args.forEach((node, i) => {
+      const name = spec.params[i]?.name;
+      const corners = node.type === "CELL_RANGE" ? [node.start, node.end] : node.type === "CELL_REFERENCE" ? [node.reference, node.reference] : undefined;
+      if (!name || !corners || !corners[0] || !corners[1]) return;
+      try {
+        const a = corners[0].toSimpleCellAddress(base);
+        const b = corners[1].toSimpleCellAddress(base);
+        const sheet = a.sheet === base.sheet ? undefined : (this as unknown as SheetNames).dependencyGraph?.sheetMapping?.getSheetName(a.sheet);
+        places[name] = { ...(sheet ? { sheet } : {}), row: Math.min(a.row, b.row), col: Math.min(a.col, b.col), rows: Math.abs(b.row - a.row) + 1, cols: Math.abs(b.col - a.col) + 1 };
+      } catch {
+        // A reference the engine cannot place (a deleted sheet): the message keeps its position.
+      }
+    });
+    return places;
+  }
+
   evaluate(spec: FunctionSpec, ast: Call, state: State): InterpreterValue {
     // Arguments are evaluated here rather than through the engine's argument checks, so that an
     // error value or a surplus argument reaches Ebb's coercion and gets Ebb's message.
     const args = ast.args.map((node) => (node.type === "EMPTY" ? undefined : this.evaluateAst(node as never, state)));
-    const outcome = invoke(spec, args.map(argumentIn));
+    const outcome = invoke(spec, args.map(argumentIn), this.placesOf(spec, ast, state));
     if (!outcome.ok) return errorOut(outcome.error);
     const value = outcome.value;
     if (typeof value === "number") return value;

@@ -80,7 +80,7 @@ export async function writeLedgers(ctx: ActionContext): Promise<void> {
     try {
       desc = describeLedger(input);
     } catch (e) {
-      ctx.say(`${pick.name}: ${messageOf(e)}${i > 0 ? ` (${i} ledger${i > 1 ? "s" : ""} written before this one)` : ""}`, "error");
+      ctx.say(`${pick.name}: ${messageOf(e, pick)}${i > 0 ? ` (${i} ledger${i > 1 ? "s" : ""} written before this one)` : ""}`, "error");
       return;
     }
     const report = (done: number, all: number) => progress.show(done, all, `Writing the ledger for ${pick.name}: ${Math.round((100 * done) / all)}%`);
