@@ -142,20 +142,20 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
           add("actual-changed", cell.value, `This actual is now ${show(found.formula ?? found.value)}; the ledger was written from ${show(cell.value)}. Type that back, or write a new ledger from the corrected history.`);
         }
         break;
-      case "source":
+      case "source": {
+        // An actual refers to its history cell; on a corrected ledger a correction to its corrections cell.
+        const correction = cell.col === expected.layout.updates.columns.correction;
+        const what = correction ? "correction" : "actual";
+        const home = correction ? "corrections cell" : "history cell";
         if (found.formula === undefined) {
-          add("actual-changed", cell.formula!, `This actual should refer to its history cell ${cell.source} (${cell.formula}); it now holds ${show(found.value)}. Write the reference back, or write a new ledger.`);
+          add("actual-changed", cell.formula!, `This ${what} should refer to its ${home} ${cell.source} (${cell.formula}); it now holds ${show(found.value)}. Write the reference back, or write a new ledger.`);
         } else if (normaliseFormula(found.formula) !== normaliseFormula(cell.formula!)) {
-          add("formula-changed", cell.formula!, `This actual should refer to its history cell ${cell.source}; Ebb wrote ${cell.formula}.`);
+          add("formula-changed", cell.formula!, `This ${what} should refer to its ${home} ${cell.source}; Ebb wrote ${cell.formula}.`);
         } else if (!sameConstant(found.value, cell.value)) {
-          const what = cell.col === expected.layout.updates.columns.correction || cell.col === expected.layout.start.columns.correction ? "correction" : "history";
-          if (what === "correction") {
-            add("source-changed", cell.value, `The correction cell ${cell.source} now holds ${show(found.value)}; the ledger was written with ${show(cell.value)} and now computes with the new figure. If the change is right, write the ledger again so its record and check follow it.`);
-            break;
-          }
-          add("source-changed", cell.value, `The history cell ${cell.source} now holds ${show(found.value)}; the ledger was written from ${show(cell.value)} and now computes with the new figure. If the correction is right, write the ledger again so its record and check follow it.`);
+          add("source-changed", cell.value, `The ${home} ${cell.source} now holds ${show(found.value)}; the ledger was written from ${show(cell.value)} and now computes with the new figure. If the change is right, write the ledger again so its record and check follow it.`);
         }
         break;
+      }
       case "reason":
         // The words are the planner's; a reason that refers to the reasons column must keep referring to it.
         if (cell.formula !== undefined && (found.formula === undefined || normaliseFormula(found.formula) !== normaliseFormula(cell.formula))) {
