@@ -4,7 +4,7 @@
  * instead of a position ("cell 85 of history"). Set by invoke() for one call.
  */
 import { EbbError } from "../engine";
-import { cellAddress } from "../ledger/describe/addresses";
+import { cellAddress, shownAddress } from "../ledger/describe/addresses";
 
 /** A range argument's top-left cell and size; `sheet` only when it is not the formula's own sheet. */
 export interface RangePlace {
@@ -40,8 +40,7 @@ export function addressIn(argument: string, index: number, column = 0): string |
   const along = p.rows === 1 && p.cols > 1;
   const row = along ? p.row : p.row + index;
   const col = along ? p.col + index : p.col + column;
-  const sheet = p.sheet === undefined ? "" : /^[A-Za-z_][A-Za-z0-9_.]*$/.test(p.sheet) ? `${p.sheet}!` : `'${p.sheet.replace(/'/g, "''")}'!`;
-  return `${sheet}${cellAddress(row, col)}`;
+  return p.sheet === undefined ? cellAddress(row, col) : shownAddress(p.sheet, row, col);
 }
 
 /** The error with the address of the input cell it is about in front, when the engine said which and the host where. */

@@ -47,6 +47,12 @@ export function quoteSheet(sheet: string): string {
   return `'${sheet.replace(/'/g, "''")}'`;
 }
 
+/** A cell as messages name it: Sales!B50, or 'Hose reels'!B50 where the sheet name needs quotes. */
+export function shownAddress(sheet: string, row: number, col: number): string {
+  const shown = /^[A-Za-z_][A-Za-z0-9_.]*$/.test(sheet) ? sheet : quoteSheet(sheet);
+  return `${shown}!${cellAddress(row, col)}`;
+}
+
 export function sheetReference(sheet: string, address: string): string {
   return `${quoteSheet(sheet)}!${address}`;
 }

@@ -3,6 +3,7 @@ import type { EngineFigures } from "./engineFigures";
 import type { Geometry } from "./layout";
 import { ledgerName } from "./names";
 import type { SheetCells } from "./sheet";
+import type { CorrectionFigures } from "./correctedInput";
 import type { HistorySource, LedgerName } from "./types";
 
 /** What every section builder needs: the engine's figures, the geometry and the cell collector. */
@@ -21,7 +22,7 @@ export interface SectionContext {
   /** The actuals as recorded, one per period (null = blank); the engine ran on the values used. */
   actuals: (number | null)[];
   /** The corrections, when the ledger has correction columns (one per period). */
-  corrections?: { values: (number | null)[]; reasons: string[]; source?: HistorySource; reasonSource?: HistorySource };
+  corrections?: CorrectionFigures;
   /** Cells other sections refer to, filled in as sections are built. */
   refs: {
     startLevel?: string;

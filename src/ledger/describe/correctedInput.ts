@@ -1,4 +1,4 @@
-import { applyCorrections, badInput } from "../../engine";
+import { applyCorrections, badInput, correctedCount } from "../../engine";
 import { isMissing } from "../../engine/series";
 import type { HistorySource, LedgerInput } from "./types";
 
@@ -8,7 +8,16 @@ export interface LedgerFigures {
   actuals: (number | null)[];
   /** The values used: the engine's applyCorrections rule, or the actuals without corrections. */
   used: (number | null)[];
-  corrections?: { values: (number | null)[]; reasons: string[]; source?: HistorySource; reasonSource?: HistorySource };
+  corrections?: CorrectionFigures;
+}
+
+/** The corrections per period, and how many periods they correct (the engine's count). */
+export interface CorrectionFigures {
+  values: (number | null)[];
+  reasons: string[];
+  count: number;
+  source?: HistorySource;
+  reasonSource?: HistorySource;
 }
 
 /**
@@ -24,11 +33,11 @@ export function ledgerFigures(input: LedgerInput): LedgerFigures {
   const hist = padded(actuals, n, null);
   const values = padded(Array.from(given.values, (v, i) => checkedCorrection(v, i)), n, null);
   const reasons = padded(Array.from(given.reasons ?? [], (r) => (r === null || r === undefined ? "" : String(r))), n, "");
-  const { values: used } = applyCorrections(hist, values);
+  const applied = applyCorrections(hist, values);
   return {
     actuals: hist,
-    used,
-    corrections: { values, reasons, ...(given.source ? { source: given.source } : {}), ...(given.reasonSource ? { reasonSource: given.reasonSource } : {}) },
+    used: applied.values,
+    corrections: { values, reasons, count: correctedCount(applied), ...(given.source ? { source: given.source } : {}), ...(given.reasonSource ? { reasonSource: given.reasonSource } : {}) },
   };
 }
 

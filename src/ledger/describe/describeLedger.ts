@@ -27,8 +27,7 @@ export function describeLedger(input: LedgerInput): LedgerDescription {
   const f = engineFigures(figures.used, input.settings, input.horizon, input.coverage);
   const spec = f.model.spec;
   const n = f.y.length;
-  const actuals = figures.actuals.slice(0, n);
-  while (actuals.length < n) actuals.push(null);
+  const actuals = padded(figures.actuals, n, null);
   const corrections = figures.corrections && {
     ...figures.corrections,
     values: padded(figures.corrections.values, n, null),

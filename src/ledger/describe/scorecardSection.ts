@@ -55,6 +55,5 @@ function correctedRow(ctx: SectionContext): [ScoreKey, string, number, string, u
   const startRange = `${abs(g.start.first, sc)}:${abs(g.start.first + f.window - 1, sc)}`;
   const firstOwn = g.updates.firstUpdate + (Math.max(f.window, f.firstUpdate) - f.firstUpdate);
   const updateRange = `${abs(firstOwn, uc)}:${abs(g.updates.reachLast, uc)}`;
-  const count = ctx.corrections.values.filter((v) => v !== null).length;
-  return ["corrected", `=COUNT(${startRange})+COUNT(${updateRange})`, count, FORMAT.count, undefined];
+  return ["corrected", `=COUNT(${startRange})+COUNT(${updateRange})`, ctx.corrections.count, FORMAT.count, undefined];
 }

@@ -1,4 +1,4 @@
-import { cellAddress, quoteSheet } from "./addresses";
+import { cellAddress, quoteSheet, shownAddress } from "./addresses";
 import type { SectionContext } from "./context";
 import { FORMAT } from "./sheet";
 import type { HistorySource } from "./types";
@@ -15,8 +15,7 @@ export function sourceReference(source: HistorySource, t: number): string {
 
 /** The source's cell for period t, as the check's messages name it (Sales!B50). */
 export function sourceAddress(source: HistorySource, t: number): string {
-  const sheet = /^[A-Za-z_][A-Za-z0-9_.]*$/.test(source.sheet) ? source.sheet : quoteSheet(source.sheet);
-  return `${sheet}!${cellAddress(source.firstRow + t, source.col)}`;
+  return shownAddress(source.sheet, source.firstRow + t, source.col);
 }
 
 /** The actual of period t at (row, col): a reference to its source cell, or the typed value. */

@@ -298,7 +298,7 @@ export interface LedgerDescription {
   /** The history's cells the actuals refer to (undefined: typed actuals). */
   source?: HistorySource;
   /** The corrections as written (undefined: a ledger without correction columns). */
-  corrections?: { values: (number | null)[]; reasons: string[]; source?: HistorySource; reasonSource?: HistorySource };
+  corrections?: import("./correctedInput").CorrectionFigures;
   name: string;
   cells: LedgerCell[];
   names: LedgerName[];

@@ -100,20 +100,20 @@ export class PreviewWorkbook {
   /** Undo the last user step; false when there is none. */
   undo(): boolean {
     this.absorbUntracked();
-    const n = this.done.pop();
-    if (n === undefined) return false;
-    for (let i = 0; i < n && this.hf.isThereSomethingToUndo(); i++) this.hf.undo();
-    this.undone.push(n);
-    this.knownDepth = this.undoDepth();
-    return true;
+    return this.replay(this.done, this.undone, () => this.hf.isThereSomethingToUndo(), () => this.hf.undo());
   }
 
   /** Redo the last undone step; false when there is none. */
   redo(): boolean {
-    const n = this.undone.pop();
+    return this.replay(this.undone, this.done, () => this.hf.isThereSomethingToRedo(), () => this.hf.redo());
+  }
+
+  /** Replay the engine entries of the newest step of `from`, one `apply` each while `can` says so, and move the step to `to`. */
+  private replay(from: number[], to: number[], can: () => boolean, apply: () => void): boolean {
+    const n = from.pop();
     if (n === undefined) return false;
-    for (let i = 0; i < n && this.hf.isThereSomethingToRedo(); i++) this.hf.redo();
-    this.done.push(n);
+    for (let i = 0; i < n && can(); i++) apply();
+    to.push(n);
     this.knownDepth = this.undoDepth();
     return true;
   }

@@ -1,5 +1,5 @@
 import { EbbError } from "../../engine";
-import { cellAddress } from "../../ledger/describe/addresses";
+import { shownAddress } from "../../ledger/describe/addresses";
 
 /** Where a history's period 1 lies on the sheet, so a message about period t can name its cell. */
 export interface HistoryCells {
@@ -15,7 +15,7 @@ export interface HistoryCells {
 export function messageOf(e: unknown, history?: HistoryCells): string {
   if (e instanceof EbbError) {
     if (!history || !e.at || (e.at.argument ?? "history") !== "history") return e.message;
-    return `${history.sheet}!${cellAddress(history.firstRow + e.at.index, history.col)}: ${e.message}`;
+    return `${shownAddress(history.sheet, history.firstRow + e.at.index, history.col)}: ${e.message}`;
   }
   if (e instanceof Error) return `Something went wrong: ${e.message}`;
   return `Something went wrong: ${String(e)}`;

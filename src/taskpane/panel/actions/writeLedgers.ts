@@ -137,6 +137,6 @@ function wroteMessage(d: LedgerDescription): string {
 /** On a corrected ledger: how many periods the updates take from the corrections column. */
 function correctedNote(d: LedgerDescription): string {
   if (!d.corrections) return "";
-  const n = d.corrections.values.filter((v) => v !== null).length;
+  const n = d.corrections.count;
   return ` ${n} period${n === 1 ? "" : "s"} corrected: the updates use the correction, and the Actual column keeps the recorded figure.`;
 }
