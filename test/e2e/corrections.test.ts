@@ -73,6 +73,9 @@ describeWithChromium("preview Corrections sheet in Chromium", () => {
     expect(Number((await cell(layout.scorecard.corrected)).value)).toBe(Object.keys(DEMO_CORRECTIONS).length);
     await page.click(`td[data-cell="${letter(c.used)}${r}"]`);
     await page.screenshot({ path: join(ARTIFACTS, "preview-ledger-corrections.png") });
+    // The top of the ledger: settings, the scorecard's "Periods corrected" and the start table's correction columns.
+    await page.click(`td[data-cell="${layout.scorecard.corrected}"]`);
+    await page.screenshot({ path: join(ARTIFACTS, "preview-ledger-corrections-top.png") });
     await page.click("#ebb-verify");
     await page.waitForFunction(() => !document.querySelector(".ebb-panel")!.hasAttribute("aria-busy"));
     expect(await page.textContent("#ebb-message")).toMatch(/^All \d+ cells of the ledger on .* match the engine\./);
