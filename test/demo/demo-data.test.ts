@@ -4,6 +4,8 @@ import {
   DEMO_EVENTS,
   DEMO_MISSING_MONTHS,
   DEMO_NOTICE,
+  DEMO_STEP,
+  DEMO_STEP_PRODUCT,
   demoCsv,
   generateDemo,
   mulberry32,
@@ -16,6 +18,7 @@ const EXPECTED_PEAK: Record<string, number> = {
   "Bird feed (sacks)": 1, // winter
   "Solar garden lights (units)": 5, // growth product, late-spring peak
   "Flower bulbs (packs)": 9, // autumn bulb season; the product with missing months
+  "Rain barrels (units)": 6, // summer; the product whose demand steps up in July 2025
 };
 const MISSING_PRODUCT = "Flower bulbs (packs)";
 
@@ -41,7 +44,7 @@ describe("Larkmere demo data (invented)", () => {
     for (let i = 0; i < 5; i++) expect(a()).toBe(b());
   });
 
-  it("covers Jan 2019 - Dec 2025 for the five intended products", () => {
+  it("covers Jan 2019 - Dec 2025 for the six intended products", () => {
     expect(data.months).toHaveLength(84);
     expect(data.months[0]).toBe("2019-01");
     expect(data.months[83]).toBe("2025-12");
@@ -132,5 +135,25 @@ describe("the invented promotion and stock-out", () => {
       const v = hose.values[data.months.indexOf(e.month)]!;
       expect(v).toBe(e.kind === "promotion" ? Math.max(...same) : Math.min(...same));
     }
+  });
+});
+
+describe("the invented step change", () => {
+  const data = generateDemo();
+  it("is labelled invented and lies in the last year, so the review list should see it", () => {
+    expect(DEMO_STEP.story).toMatch(/\(invented\)/);
+    expect(data.months.indexOf(DEMO_STEP.month)).toBeGreaterThan(data.months.length - 12);
+  });
+  it("raises every month from its start by about its factor against the same months a year before", () => {
+    const p = data.products.find((q) => q.name === DEMO_STEP_PRODUCT)!;
+    const from = data.months.indexOf(DEMO_STEP.month);
+    const sum = (a: number, b: number) => (p.values.slice(a, b) as number[]).reduce((s, v) => s + v, 0);
+    const ratio = sum(from, data.months.length) / sum(from - 12, data.months.length - 12);
+    // The recipe's 2% growth a year and its noise move the ratio a little off the factor.
+    expect(ratio).toBeGreaterThan(DEMO_STEP.factor - 0.12);
+    expect(ratio).toBeLessThan(DEMO_STEP.factor + 0.12);
+    // Before the step, the same comparison shows no step.
+    const before = sum(from - 12, from) / sum(from - 24, from - 12);
+    expect(Math.abs(before - 1)).toBeLessThan(0.12);
   });
 });

@@ -7,7 +7,7 @@
  */
 import { cleanHistory, MAD_TO_SD, unusualPeriods, UNUSUAL_THRESHOLD } from "../../src/engine";
 import { seededNormal as seededNormalForTests } from "../../src/engine/random";
-import { DEMO_EVENTS, demoMonths } from "../../src/preview/demo/generate-demo";
+import { DEMO_EVENTS, DEMO_STEP, DEMO_STEP_PRODUCT, demoMonths } from "../../src/preview/demo/generate-demo";
 import { readDemo } from "../functions/support/demo";
 
 const demo = readDemo();
@@ -30,9 +30,22 @@ test("the demo's promotion and stock-out are flagged, high and low, and nothing 
   expect(values).toEqual(before); // it suggests; it never changes the history
 });
 
+test("the step product's flags are high and lie in the first months of its lasting step", () => {
+  const k = demo.names.indexOf(DEMO_STEP_PRODUCT);
+  const u = unusualPeriods(demo.columns[k], { period: 12, seasonality: "auto", trend: "auto" });
+  const from = months.indexOf(DEMO_STEP.month);
+  // A lasting step looks unusual until the model has followed it; the tracking signal then says it lasts.
+  for (let i = 0; i < u.flag.length; i++) {
+    if (u.flag[i] === 0) continue;
+    expect(u.flag[i]).toBe(1);
+    expect(i).toBeGreaterThanOrEqual(from);
+    expect(i).toBeLessThan(from + 3);
+  }
+});
+
 test("the other demo products carry no flag at the default threshold", () => {
   demo.names.forEach((name, k) => {
-    if (DEMO_EVENTS.some((e) => e.product === name)) return;
+    if (DEMO_EVENTS.some((e) => e.product === name) || name === DEMO_STEP_PRODUCT) return;
     const u = unusualPeriods(demo.columns[k], { period: 12, seasonality: "auto", trend: "auto" });
     expect({ name, flags: [...u.flag].filter((f) => f !== 0).length }).toEqual({ name, flags: 0 });
   });

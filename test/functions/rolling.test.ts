@@ -53,9 +53,9 @@ describe("rolling outlook =EBB.AHEAD(B2:B200, 12, 6)", () => {
 });
 
 describe("product table: one formula, one outlook column per product", () => {
-  // 20 invented products: the 5 demo products at 4 scales (the demo data are invented too).
+  // 20 invented products: the first 5 demo products at 4 scales (the demo data are invented too).
   const scales = [1, 0.5, 1.5, 2];
-  const products = scales.flatMap((k) => demo.columns.map((col) => col.map((v) => (v === null ? null : v * k))));
+  const products = scales.flatMap((k) => demo.columns.slice(0, 5).map((col) => col.map((v) => (v === null ? null : v * k))));
 
   test("=EBB.AHEAD over 20 columns spills 20 columns, each the engine's forecast for its column", () => {
     expect(products).toHaveLength(20);

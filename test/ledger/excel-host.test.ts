@@ -64,8 +64,11 @@ describe("Excel host adapter", () => {
     expect(fake.calls.filter((c) => c.what === "notes.add").length).toBe(desc.cells.filter((c) => c.note).length);
     expect(fake.calls.filter((c) => c.what === "merge").map((c) => c.args[0])).toEqual(desc.merges);
     const flagRange = desc.flags[0].range;
-    const cf = fake.ranges.get(flagRange)!.conditionalFormat as { cellValue: { rule: { operator: string; formula1: string; formula2: string } } };
-    expect(cf.cellValue.rule).toEqual({ formula1: "=-4", formula2: "=4", operator: "NotBetween" });
+    const cf = fake.ranges.get(flagRange)!.conditionalFormat as { custom: { rule: { formula: string } } };
+    // A formula rule shades numbers beyond the windowed signal's +/-2.2 and never the blank text of an undefined signal.
+    const topLeft = flagRange.split(":")[0];
+    expect(fake.calls.some((c) => c.what === "conditionalFormats.add" && c.args[0] === flagRange && c.args[1] === "Custom")).toBe(true);
+    expect(cf.custom.rule.formula).toBe(`=AND(ISNUMBER(${topLeft}),OR(${topLeft}<-2.2,${topLeft}>2.2))`);
     // The settings guard's warnings: a text rule on the explanation column (one per warning phrase).
     const textFlags = desc.flags.filter((f) => "containsText" in f);
     expect(textFlags.length).toBeGreaterThan(0);

@@ -42,7 +42,10 @@ describe("xlsx adapter", () => {
     const cf = (ws as unknown as { conditionalFormattings: { ref: string; rules: { type: string; operator?: string; formulae: string[] }[] }[] }).conditionalFormattings;
     // The tracking-signal limits, then the settings guard's warning phrases, read back from the file.
     expect(cf.map((c) => [c.ref, c.rules[0].type, c.rules[0].operator ?? c.rules[0].formulae[0]])).toEqual(
-      desc.flags.map((f) => ("outside" in f ? [f.range, "cellIs", "notBetween"] : [f.range, "expression", `NOT(ISERROR(SEARCH("${f.containsText}",${f.range.split(":")[0]})))`])),
+      desc.flags.map((f) => {
+        const tl = f.range.split(":")[0];
+        return "outside" in f ? [f.range, "expression", `AND(ISNUMBER(${tl}),OR(${tl}<-2.2,${tl}>2.2))`] : [f.range, "expression", `NOT(ISERROR(SEARCH("${f.containsText}",${tl})))`];
+      }),
     );
     expect(desc.flags.filter((f) => "containsText" in f).length).toBeGreaterThan(0);
   });

@@ -9,6 +9,8 @@ export { bias } from "./bias";
 export {
   trackingSignal,
   windowSignal,
+  windowFigures,
+  type WindowFigures,
   runningErrorSum,
   parseTrackingForm,
   trackingLimit,

@@ -85,8 +85,33 @@ export function trackingSignal(actual: ArrayLike<number>, forecast: ArrayLike<nu
 
 /** The windowed signal over a series of errors (NaN = missing), as defined in {@link trackingSignal}. */
 export function windowSignal(errors: ArrayLike<number>, window = TRACKING_WINDOW): Float64Array {
+  return windowFigures(errors, window).signal;
+}
+
+/** The windowed signal with the two figures it divides, per period, as the ledger's columns show them. */
+export interface WindowFigures {
+  /** Sum of the errors present in the window ending at each period (0 when none is). */
+  windowSum: Float64Array;
+  /** Mean |error| of the periods before the window; NaN until TRACKING_BASELINE errors precede it. */
+  baselineMad: Float64Array;
+  /** The signal; NaN while the baseline MAD is missing or the window holds no error. */
+  signal: Float64Array;
+}
+
+/**
+ * The windowed signal's parts over a series of errors (NaN = missing): the window sum, the MAD
+ * before the window and the signal, as defined in {@link trackingSignal}.
+ * @example
+ * // errors 1, -1, 1, -1, 1, -1, 2, 2, 2, 2, 2, 2 (window 6)
+ * windowFigures(e).windowSum[11] // 12
+ * windowFigures(e).baselineMad[11] // 1 (the six errors before the window)
+ * windowFigures(e).baselineMad[10] // NaN (only five errors before its window)
+ */
+export function windowFigures(errors: ArrayLike<number>, window = TRACKING_WINDOW): WindowFigures {
   const n = errors.length;
-  const out = new Float64Array(n).fill(NaN);
+  const windowSum = new Float64Array(n);
+  const baselineMad = new Float64Array(n).fill(NaN);
+  const signal = new Float64Array(n).fill(NaN);
   let sumAbs = 0; // |errors| of the periods before the window
   let before = 0;
   for (let t = 0; t < n; t++) {
@@ -95,7 +120,6 @@ export function windowSignal(errors: ArrayLike<number>, window = TRACKING_WINDOW
       sumAbs += Math.abs(errors[leaving]);
       before++;
     }
-    if (before < TRACKING_BASELINE) continue;
     // The window's sum is added afresh each period (as the ledger's SUM does), so no rounding builds up.
     let sum = 0;
     let inWindow = 0;
@@ -105,11 +129,14 @@ export function windowSignal(errors: ArrayLike<number>, window = TRACKING_WINDOW
         inWindow++;
       }
     }
-    if (inWindow === 0) continue;
+    windowSum[t] = finite(sum, "Tracking signal");
+    if (before < TRACKING_BASELINE) continue;
     const mad = finite(sumAbs, "Tracking signal") / before;
-    out[t] = mad > 0 ? finite(sum / (MEAN_ABS_TO_SD * mad * Math.sqrt(inWindow)), "Tracking signal") : 0;
+    baselineMad[t] = mad;
+    if (inWindow === 0) continue;
+    signal[t] = mad > 0 ? finite(sum / (MEAN_ABS_TO_SD * mad * Math.sqrt(inWindow)), "Tracking signal") : 0;
   }
-  return out;
+  return { windowSum, baselineMad, signal };
 }
 
 /** The running-sum signal over a series of errors (NaN = missing), as defined in {@link trackingSignal}. */

@@ -1,6 +1,7 @@
 /// <reference types="office-js" />
 import { cellAddress, MAX_COLS, MAX_ROWS, parseCell, rangeAddress, sheetReference } from "../describe/addresses";
 import { FLAG_STYLE, ROLE_STYLES, roleRectangles } from "../describe/styles";
+import { numberFlagFormula } from "../describe/flagFormulas";
 import type { ChartSpec, ConditionalFlag, LedgerCell, LedgerDescription } from "../describe/types";
 import type { LedgerExtension } from "../extend";
 import { gridReader, type LedgerReader } from "../verify/reader";
@@ -323,10 +324,11 @@ function suspendUntilSync(context: Excel.RequestContext): void {
 function addFlag(sheet: Excel.Worksheet, flag: ConditionalFlag): void {
   const range = sheet.getRange(flag.range);
   if ("outside" in flag) {
-    const cf = range.conditionalFormats.add("CellValue" as Excel.ConditionalFormatType);
-    cf.cellValue.format.fill.color = FLAG_STYLE.fill;
-    cf.cellValue.format.font.color = FLAG_STYLE.color;
-    cf.cellValue.rule = { formula1: `=${flag.outside.low}`, formula2: `=${flag.outside.high}`, operator: "NotBetween" };
+    // A formula rule: a value rule would shade the blank text of a signal not yet defined.
+    const cf = range.conditionalFormats.add("Custom" as Excel.ConditionalFormatType);
+    cf.custom.format.fill.color = FLAG_STYLE.fill;
+    cf.custom.format.font.color = FLAG_STYLE.color;
+    cf.custom.rule.formula = `=${numberFlagFormula(flag.outside.low, flag.outside.high, flag.range.split(":")[0])}`;
   } else {
     const cf = range.conditionalFormats.add("ContainsText" as Excel.ConditionalFormatType);
     cf.textComparison.format.fill.color = FLAG_STYLE.fill;

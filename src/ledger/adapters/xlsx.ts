@@ -1,6 +1,7 @@
 import type ExcelJS from "exceljs";
 import { badInput } from "../../engine";
 import { cellAddress, parseCell } from "../describe/addresses";
+import { numberFlagFormula, textFlagFormula } from "../describe/flagFormulas";
 import { FORMAT } from "../describe/sheet";
 import { FLAG_STYLE, ROLE_STYLES } from "../describe/styles";
 import type { CellValue, ConditionalFlag, LedgerCell, LedgerDescription } from "../describe/types";
@@ -34,20 +35,14 @@ export function addLedgerToWorkbook(workbook: ExcelJS.Workbook, desc: LedgerDesc
   return sheet;
 }
 
-/** True where the cell holds the phrase, ignoring case (SEARCH), as the hosts' text rules compare. */
-export function textFlagFormula(phrase: string, cell: string): string {
-  return `NOT(ISERROR(SEARCH("${phrase.replace(/"/g, '""')}",${cell})))`;
-}
-
 /** One flag as a conditional-format rule: numbers outside limits, or text holding a phrase. */
 function flagRule(flag: ConditionalFlag): ExcelJS.ConditionalFormattingRule {
   const style: Partial<ExcelJS.Style> = { fill: { type: "pattern", pattern: "solid", bgColor: { argb: argb(FLAG_STYLE.fill) } }, font: { color: { argb: argb(FLAG_STYLE.color) } } };
-  if ("outside" in flag) {
-    return { type: "cellIs", operator: "notBetween" as "between", formulae: [String(flag.outside.low), String(flag.outside.high)], priority: 1, style };
-  }
-  // A formula rule (relative to the range's top-left cell): exceljs writes its text rules without the text attribute.
+  // Formula rules (relative to the range's top-left cell): exceljs writes its text rules without the
+  // text attribute, and a value rule would shade the blank text of a signal not yet defined.
   const topLeft = flag.range.split(":")[0];
-  return { type: "expression", formulae: [textFlagFormula(flag.containsText, topLeft)], priority: 1, style };
+  const formula = "outside" in flag ? numberFlagFormula(flag.outside.low, flag.outside.high, topLeft) : textFlagFormula(flag.containsText, topLeft);
+  return { type: "expression", formulae: [formula], priority: 1, style };
 }
 
 /** Cells the description writes (for callers that add rows later, e.g. an extension). */

@@ -11,6 +11,7 @@ import { scorecardSection } from "./scorecardSection";
 import { settingsSection } from "./settingsSection";
 import { SheetCells } from "./sheet";
 import { startSection } from "./startSection";
+import { trackingSummary } from "./trackingColumns";
 import type { LedgerDescription, LedgerInput } from "./types";
 import { updatesSection } from "./updatesSection";
 
@@ -86,6 +87,7 @@ export function describeLedger(input: LedgerInput): LedgerDescription {
     history: actuals,
     ...(corrections ? { corrections: { ...corrections, values: [...corrections.values], reasons: [...corrections.reasons] } } : {}),
     dataScale: f.scale,
+    tracking: trackingSummary(f.tracking),
     ...(input.source ? { source: { ...input.source } } : {}),
     name,
     cells: cells.all(),

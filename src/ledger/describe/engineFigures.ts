@@ -85,7 +85,7 @@ export function engineFigures(history: ArrayLike<number | null | undefined>, set
   const forecast = forecastModel(model, horizon);
   const actual = y.subarray(firstUpdate);
   const fc = states.forecast.subarray(firstUpdate);
-  const tracking = trackingFigures(actual, fc, states.error.subarray(firstUpdate));
+  const tracking = trackingFigures(states.error.subarray(firstUpdate));
   let mapeValue: number | string;
   try {
     mapeValue = mape(actual, fc);

@@ -1,3 +1,4 @@
+import { TRACKING_BASELINE as BASE, TRACKING_LIMIT as LIM, TRACKING_WINDOW as W } from "../../engine";
 import { ACTIONS } from "../actions";
 
 /**
@@ -93,11 +94,14 @@ export const UPDATE_COLUMNS = {
     noteMult: "gamma x actual / level + (1 - gamma) x index one season back. Missing actual: index one season back.",
     noteAdd: "gamma x (actual - level) + (1 - gamma) x index one season back. Missing actual: index one season back.",
   },
-  errorSum: { label: "Errors so far", note: "Sum of the errors from the first update down to this row." },
-  mad: { label: "MAD so far", note: "Mean of the absolute errors from the first update down to this row." },
+  errorSum: { label: `Errors, last ${W}`, note: `Sum of the errors in this row and the ${W - 1} above it (the signal's window; blanks add nothing).` },
+  mad: {
+    label: "MAD before them",
+    note: `Mean of the absolute errors above the window, from the first update on: the errors' usual size before the latest ${W}. Blank until ${BASE} errors precede the window.`,
+  },
   tracking: {
     label: "Tracking signal",
-    note: "Errors so far / MAD so far (0 until there is an error). Outside -4 to +4 it is flagged: the forecasts lean one way.",
+    note: `Errors, last ${W} / (sqrt(pi/2) x MAD before them x sqrt(errors in the window)): about a standard normal figure when the forecasts are unbiased. Beyond -${LIM} or +${LIM} (about 3 rows in 100 by chance) it is flagged: the latest forecasts lean one way.`,
   },
   correction: {
     label: "Correction",
@@ -232,8 +236,8 @@ export const SCORE_ROWS = {
   rmse: { label: "RMSE", note: "Square root of the mean squared error over the update rows." },
   mape: { label: "MAPE (%)", note: "Mean of the error % of actual column." },
   bias: { label: "Bias (mean error)", note: "Mean of the errors; positive means the forecasts ran low." },
-  tracking: { label: "Tracking signal, latest", note: "The tracking signal in the last row of the update table." },
-  outside: { label: "Rows outside +/-4", note: "Number of update rows whose tracking signal is above 4 or below -4 (those cells are shaded)." },
+  tracking: { label: "Tracking signal, latest", note: "The tracking signal in the last row of the update table (blank while it is not yet defined)." },
+  outside: { label: `Rows flagged (beyond +/-${LIM})`, note: `Number of update rows whose tracking signal is above ${LIM} or below -${LIM} (those cells are shaded). Unbiased forecasts give about 3 in 100 by chance.` },
   count: { label: "Errors counted", note: "Update rows with an actual." },
   corrected: { label: "Periods corrected", note: "Periods whose value used is a correction instead of the actual (start table and update rows)." },
 } as const;
@@ -247,4 +251,4 @@ export const CHART = {
   high: "High",
 };
 
-export const FLAG_NOTE = "Tracking signal outside -4 to +4: the forecasts have leaned one way for a while.";
+export const FLAG_NOTE = `Tracking signal beyond -${LIM} or +${LIM}: the latest ${W} forecasts have leaned one way more than chance would explain.`;

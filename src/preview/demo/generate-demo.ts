@@ -1,6 +1,6 @@
 /**
  * Invented demo data for Ebb: Larkmere Garden Supply, a fictional regional garden-supply
- * wholesaler, monthly unit sales Jan 2019 - Dec 2025 for five products with different
+ * wholesaler, monthly unit sales Jan 2019 - Dec 2025 for six products with different
  * seasonal shapes. Nothing here is taken from a real company or a published data set; every
  * number comes from the seeded recipe below.
  *
@@ -61,7 +61,26 @@ interface Recipe {
   missing?: string[];
   /** Months whose sales did not show normal demand (a promotion, a stock-out). */
   events?: readonly DemoEvent[];
+  /** A lasting change of demand: from this month on, every month sells `factor` times as much. */
+  step?: DemoStep;
 }
+
+/** A lasting step in demand, built into a product's recipe (the review list should catch it). */
+export interface DemoStep {
+  month: string;
+  factor: number;
+  /** What happened, in the invented story. */
+  story: string;
+}
+
+/** The invented step change: the review list and the ledger's tracking signal should flag rain barrels. */
+export const DEMO_STEP_PRODUCT = "Rain barrels (units)";
+const STEP: DemoStep = {
+  month: "2025-07",
+  factor: 1.4,
+  story: "From July 2025 a garden-centre chain (invented) stocks rain barrels in all its shops: sales are about 40% higher for good.",
+};
+export const DEMO_STEP = STEP;
 
 /** Months lost to the (invented) stock-system outage; blank cells in the flower bulbs column. */
 export const DEMO_MISSING_MONTHS: readonly string[] = ["2023-05", "2023-06", "2023-07"];
@@ -119,6 +138,17 @@ const RECIPES: Recipe[] = [
     noise: 0.06,
     yearShock: 0.04,
     missing: [...DEMO_MISSING_MONTHS],
+  },
+  {
+    // Summer item whose demand stepped up for good: a new customer from mid-2025 (see DEMO_STEP).
+    name: "Rain barrels (units)",
+    seasonality: "multiplicative",
+    level: 350,
+    growth: 0.02,
+    shape: [0.4, 0.5, 0.85, 1.3, 1.6, 1.7, 1.55, 1.25, 0.9, 0.7, 0.6, 0.55],
+    noise: 0.06,
+    yearShock: 0.03,
+    step: STEP,
   },
 ];
 
@@ -198,6 +228,7 @@ export function generateDemo(): DemoData {
         v = level + shape[m] + shock + r.noise * z;
       }
       v *= events.get(month) ?? 1;
+      if (r.step && month >= r.step.month) v *= r.step.factor;
       values.push(missing.has(month) ? null : Math.max(1, Math.round(v)));
     });
     return { name: r.name, values };

@@ -183,7 +183,7 @@ function readmeLines(notice: string): string[] {
     CAUTIONS,
     "",
     "What the Sales sheet shows",
-    "Columns A to F: monthly unit sales, January 2019 to December 2025, one column per product (Flower bulbs has three missing months).",
+    "Columns A to G: the month and monthly unit sales, January 2019 to December 2025, one column per product (Flower bulbs has three missing months; Rain barrels sells about 40% more for good from July 2025).",
     "Column H onwards: a rolling forecast built from EBB worksheet functions; every number is a live formula (select a cell to see it in the formula bar).",
     "Cells with a tinted background are spilled results: one formula in the first cell fills the whole block.",
     "",
@@ -192,6 +192,7 @@ function readmeLines(notice: string): string[] {
     "2. Select one product's column (click its letter), then use the Ebb ledger panel to write a ledger: plain formulas, one row per month.",
     `3. On the ledger sheet, change alpha in its settings and watch every row recompute; press "${ACTIONS.verify}" to check the ledger (and the Sales figures it refers to) against Ebb's engine.`,
     "4. On Corrections: hose reels had an (invented) promotion in March 2024 and a stock-out in June 2025. EBB.UNUSUAL flags both and suggests a value; the planner typed a correction and a reason beside each actual. The outlook and safety stock are shown as recorded and with the corrections (EBB.CORRECTED). Clear a correction to see its effect; the actuals on Sales never change.",
+    "5. The review list at the foot of Sales (EBB.WATCH) flags the items to look at: rain barrels, whose demand stepped up, reads forecast too low. Write its ledger to see the rose tracking-signal rows, and the panel says the signal is beyond its limit.",
     "",
     "Errors: #N/A means more history is needed (the message says how much); #VALUE! means an input must be changed. Hover over an error or select it to read why.",
   ];

@@ -54,7 +54,7 @@ export function fakeExcel(options: FakeExcelOptions): FakeExcel {
       conditionalFormats: {
         add: (type: string) => {
           record("conditionalFormats.add", address, type);
-          const cf = { cellValue: { format: { fill: {}, font: {} }, rule: undefined as unknown }, textComparison: { format: { fill: {}, font: {} }, rule: undefined as unknown } };
+          const cf = { custom: { format: { fill: {}, font: {} }, rule: {} as Record<string, unknown> }, cellValue: { format: { fill: {}, font: {} }, rule: undefined as unknown }, textComparison: { format: { fill: {}, font: {} }, rule: undefined as unknown } };
           props.conditionalFormat = cf;
           return cf;
         },

@@ -5,6 +5,7 @@ import type { LedgerLocation } from "../../port";
 import { ask } from "../confirmStep";
 import { readCorrectionCells } from "../correctionColumns";
 import { pickHistories, type HistoryPick } from "../historyPick";
+import { signalNote } from "../signalNote";
 import type { ActionContext } from "./actionContext";
 import { chooseHistory } from "./chooseHistory";
 import { requireLedger } from "./ledgerList";
@@ -51,7 +52,7 @@ export async function addNewActuals(ctx: ActionContext): Promise<void> {
   await ctx.port.writeExtension(ext, (done, total) => ctx.progress.show(done, total, `Adding rows: ${Math.round((100 * done) / total)}%`));
   ctx.port.ledgerShown?.(ext.description);
   const count = added.length;
-  ctx.say(`Added ${count} period${count > 1 ? "s" : ""} to the ledger on "${loc.sheet}"; the outlook and scorecard now start after period ${known.length + count}.`, "done");
+  ctx.say(`Added ${count} period${count > 1 ? "s" : ""} to the ledger on "${loc.sheet}"; the outlook and scorecard now start after period ${known.length + count}.${signalNote(ext.description)}`, "done");
 }
 
 /** The history to extend from: the cells the ledger's actuals refer to, else the source of a ledger written this session, else the selection. */

@@ -3,6 +3,7 @@ import { defaultTag, describeLedger, uniqueTag, type LedgerDescription, type Led
 import { ask } from "../confirmStep";
 import { readCorrections } from "../correctionColumns";
 import { messageOf } from "../messages";
+import { signalNote } from "../signalNote";
 import { formValues, type PanelView } from "../panelView";
 import { yieldToPage } from "../progress";
 import { parseArea, readForm, sheetNameFor } from "../readForm";
@@ -130,7 +131,7 @@ function wroteMessage(d: LedgerDescription): string {
   if (d.spec.trend === "damped") parts.push(`phi ${fourDecimals(k.phi)}`);
   return (
     `Wrote the ledger for "${d.name}" on the sheet "${d.sheet}" from ${d.anchor}: ${d.spec.seasonality} seasonality, ${d.spec.trend} trend, ` +
-    `season length ${d.spec.period}; ${parts.join(", ")}.${correctedNote(d)} Change alpha or another setting in its yellow cells and every row recomputes.`
+    `season length ${d.spec.period}; ${parts.join(", ")}.${correctedNote(d)}${signalNote(d)} Change alpha or another setting in its yellow cells and every row recomputes.`
   );
 }
 
