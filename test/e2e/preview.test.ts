@@ -78,7 +78,7 @@ describeWithChromium("preview workbook in Chromium", () => {
 
   test("spilled EBB.AHEAD and EBB.BAND results in the grid equal the engine's", async () => {
     const page = await session.open();
-    // The demo puts EBB.AHEAD(B2:F200, 12, 12) at I5 (12 x 5) and EBB.BAND(..., 0.95) at I20 (12 x 10).
+    // The demo puts EBB.AHEAD(B2:G200, 12, 12) at I5 (12 x 6) and EBB.BAND(..., 0.95) at I20 (12 x 12).
     const ahead: string[] = [];
     const band: string[] = [];
     for (let h = 0; h < HORIZON; h++) {
@@ -101,7 +101,7 @@ describeWithChromium("preview workbook in Chromium", () => {
     expect(await page.getAttribute('td[data-cell="I5"]', "class")).toContain("spill-anchor");
     expect(await page.getAttribute('td[data-cell="M16"]', "class")).toContain("spill-part");
     await page.click('td[data-cell="K9"]');
-    expect(await page.inputValue("#cell-contents")).toBe("=EBB.AHEAD(B2:F200, 12, 12)");
+    expect(await page.inputValue("#cell-contents")).toBe("=EBB.AHEAD(B2:G200, 12, 12)");
     expect(await page.textContent("#cell-note")).toContain("Spilled from the formula in I5");
   });
 

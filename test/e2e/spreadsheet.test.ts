@@ -86,7 +86,7 @@ describeWithChromium("the preview grid as a spreadsheet", () => {
     await typeInto(page, "J6", "5");
     expect(await shown(page, "I5")).toBe("#SPILL!");
     await page.click('td[data-cell="I5"]');
-    expect(await page.textContent("#cell-note")).toMatch(/needs I5:M16, and J6 is in the way\. Clear that cell/);
+    expect(await page.textContent("#cell-note")).toMatch(/needs I5:N16, and J6 is in the way\. Clear that cell/);
     await page.screenshot({ path: join(ARTIFACTS, "preview-spill-blocked.png") });
     await typeInto(page, "J6", "");
     expect(await shown(page, "I5")).not.toBe("#SPILL!");
