@@ -115,16 +115,18 @@ status that applies:
   too short                  the model cannot be fitted, or fewer than 6 one-step errors precede
                              the signal's 6-period window
   forecast too low / high    the windowed tracking signal is above +2.2 / below -2.2
-  worse than seasonal naive  refitted without the last season, the model's forecasts of that
-                             season miss by more than 1.1 x the seasonal naive forecast's
+  worse than seasonal naive  refitted before each of its last seasons (up to 3), the model's
+                             forecasts of them miss by more than 1.1 x the seasonal naive
+                             forecast's from the same origins (same month a season back)
   ok                         none of these
 Output, --format json: {"series": [{...}, ...], "statuses": {status: count, ...}}, one entry per
 column, with name and
   watch: {status, tracking_signal, bias_percent, mase, naive_ratio, outside_band}
 tracking_signal: the sum of the last 6 one-step errors over sqrt(pi/2) x the MAD of the errors
 before them x sqrt(6) (a backward CUSUM; about 3% false alarms on an unbiased forecast).
-bias_percent: mean error of the last 6 periods as a percent of their mean actual. mase and
-naive_ratio: the last season's forecasts from the history before it. outside_band: how many of
+bias_percent: mean error of the last 6 periods as a percent of their mean actual. mase: the
+last season's forecasts from the history before it. naive_ratio: the same for up to the last 3
+seasons, over the seasonal naive forecast's. outside_band: how many of
 the last 6 actuals fell outside the one-step 95% band. Undefined values are null.
 ${MODEL_NOTES}
 Output, --format csv: one row per series with columns

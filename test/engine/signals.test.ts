@@ -2,7 +2,7 @@
  * The windowed tracking signal, the review list (EBB.WATCH's engine) and forecast value added,
  * against hand calculations from their published definitions.
  */
-import { forecastValueAdded, holdoutScore, parseFvaMeasure, parseTrackingForm, TRACKING_LIMIT, trackingSignal, watchSeries, windowSignal } from "../../src/engine";
+import { fitModel, forecastModel, forecastValueAdded, holdoutScore, parseFvaMeasure, parseTrackingForm, TRACKING_LIMIT, trackingSignal, watchSeries, windowSignal } from "../../src/engine";
 import { EbbError } from "../../src/engine/errors";
 import { seededNormal } from "../../src/engine/random";
 
@@ -188,6 +188,26 @@ describe("review list (EBB.WATCH's engine)", () => {
   test("MASE is that of the last season forecast from the history before it (the engine's holdout score)", () => {
     const r = watchSeries(base, { period: 12 });
     expect(r.mase).toBeCloseTo(holdoutScore(base, { period: 12, seasonality: "multiplicative", trend: "linear" }, 12).mase, 10);
+  });
+
+  test("the naive test: up to three seasons, each forecast from a refit before it, against the same month a year earlier, also when the model finds no season", () => {
+    // Invented: a level near 300 with noise and no seasonal pattern, 8 years monthly; the automatic model takes no season.
+    const zz = seededNormal(5);
+    const flat = Array.from({ length: 96 }, () => 300 + 20 * zz());
+    const options = { period: 12, seasonality: "auto" as const, trend: "auto" as const };
+    const spec = fitModel(flat, options).spec;
+    expect(spec.seasonality).toBe("none");
+    // By the definition: origins 84, 72 and 60; each season refitted (same form) on the values before it.
+    let model = 0;
+    let naive = 0;
+    for (const origin of [84, 72, 60]) {
+      const f = forecastModel(fitModel(flat.slice(0, origin), { period: spec.period, seasonality: spec.seasonality, trend: spec.trend }), 12);
+      for (let i = 0; i < 12; i++) {
+        model += Math.abs(flat[origin + i] - f[i]);
+        naive += Math.abs(flat[origin + i] - flat[origin + i - 12]);
+      }
+    }
+    expect(watchSeries(flat, options).naiveRatio).toBeCloseTo(model / naive, 12);
   });
 
   test("worse than seasonal naive: a jumpy model on a season that nearly repeats", () => {
