@@ -8,6 +8,7 @@ import { renderLedgerBench, runLedgerBench } from "./ledger";
 import type { M3Series } from "./m3";
 import { renderOrder, runOrderBench } from "./order";
 import type { Progress } from "./progress";
+import { renderSignals, runSignalBench } from "./signals";
 
 export interface SectionContext {
   quick: boolean;
@@ -31,6 +32,7 @@ export interface BenchSection {
 
 export const SECTIONS: BenchSection[] = [
   { name: "order", run: (c) => renderOrder(runOrderBench(c.monthly, c.quick, c.progress)) },
+  { name: "signals", run: (c) => renderSignals(runSignalBench(c.quick ? c.monthly : c.allMonthly, c.allQuarterly, c.quick, c.progress)) },
   { name: "ledger", run: async (c) => renderLedgerBench(await runLedgerBench(c.quick, c.progress)) },
   { name: "batch", last: true, run: async (c) => renderBatchSection(await batchBenchmark(c.quick, c.progress)) },
 ];
