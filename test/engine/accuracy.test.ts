@@ -252,6 +252,20 @@ describe("accuracyTable (EBB.ACCURACY)", () => {
     expect(v["Theil's U2"]).toBeCloseTo(Math.sqrt(0.04 / (0.04 + 1 / 9)), 14);
   });
 
+  test("the tracking signal row is the signal at the last period with both values, not at blank rows below it", () => {
+    // Hand case of the windowed signal: errors 1, -1, 1, -1, 1, -1, then 2 six times; MAD before the window 1,
+    // window sum 12, so 12 / (sqrt(pi/2) x 1 x sqrt(6)) = 3.9088 (the definition in tracking.ts, Harrison & Davies 1964).
+    const errors = [1, -1, 1, -1, 1, -1, 2, 2, 2, 2, 2, 2];
+    const forecast = errors.map(() => 100);
+    const actual = errors.map((e) => 100 + e);
+    const expected = 12 / (Math.sqrt(Math.PI / 2) * Math.sqrt(6));
+    const at = (rows: ReturnType<typeof accuracyTable>) => rows.find((r) => r[0] === "Tracking signal")![1] as number;
+    expect(at(accuracyTable(actual, forecast))).toBeCloseTo(expected, 12);
+    // A rolling sheet's ranges reach below the data: six blank rows must not blank the signal.
+    const pad = (v: number[]) => [...v, ...new Array(6).fill(NaN)];
+    expect(at(accuracyTable(pad(actual), pad(forecast)))).toBeCloseTo(expected, 12);
+  });
+
   test("MASE row when a history is given", () => {
     const rows = accuracyTable([24, 35, 47, 30], [23, 36, 45, 30], [20, 30, 40, 25, 22, 33, 44, 27], 4);
     expect(rows[rows.length - 1][0]).toBe("MASE");

@@ -9,7 +9,7 @@ import { pairs } from "./pairs";
 import { rmse } from "./rmse";
 import { smape } from "./smape";
 import { theilU } from "./theilU";
-import { TRACKING_BASELINE, trackingSignal } from "./tracking";
+import { TRACKING_BASELINE, TRACKING_WINDOW, trackingSignal } from "./tracking";
 
 /**
  * One row of the accuracy table: the measure's name and its value, or the EbbError that says why
@@ -67,9 +67,12 @@ export function accuracyTable(
   add("Bias", () => bias(actual, forecast));
   add("Tracking signal", () => {
     const ts = trackingSignal(actual, forecast);
-    const last = ts[ts.length - 1];
+    // The final value is that of the last period with both values: ranges that reach below the
+    // data (a rolling sheet's) end in blanks, whose windows hold no error.
+    const p = pairs(actual, forecast, "Accuracy");
+    const last = ts[p.position[p.count - 1]];
     if (last !== last) {
-      throw notEnough(TRACKING_BASELINE + 1, pairs(actual, forecast, "Accuracy").count, "periods with both an actual and a forecast", "The tracking signal needs 6 errors before its 6-period window.");
+      throw notEnough(TRACKING_BASELINE + TRACKING_WINDOW, p.count, "periods with both an actual and a forecast", "The tracking signal needs 6 errors before its 6-period window.");
     }
     return last;
   });

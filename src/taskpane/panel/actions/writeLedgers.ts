@@ -130,7 +130,7 @@ function wroteMessage(d: LedgerDescription): string {
   if (d.spec.seasonality !== "none") parts.push(`gamma ${fourDecimals(k.gamma)}`);
   if (d.spec.trend === "damped") parts.push(`phi ${fourDecimals(k.phi)}`);
   return (
-    `Wrote the ledger for "${d.name}" on the sheet "${d.sheet}" from ${d.anchor}: ${d.spec.seasonality} seasonality, ${d.spec.trend} trend, ` +
+    `Wrote the ledger for "${d.name}" on the sheet "${d.sheet}" from ${d.anchor}: ${d.spec.seasonality === "none" ? "no" : d.spec.seasonality} seasonality, ${d.spec.trend === "none" ? "no" : d.spec.trend} trend, ` +
     `season length ${d.spec.period}; ${parts.join(", ")}.${correctedNote(d)}${signalNote(d)} Change alpha or another setting in its yellow cells and every row recomputes.`
   );
 }
