@@ -12,7 +12,7 @@ const PICTURE = join(REPO, "assets/preview-screenshot.png");
 
 async function main(): Promise<void> {
   const server = await startPreviewServer();
-  const browser = await launchChromium({ width: 1280, height: 760 }); // keeps the picture small
+  const browser = await launchChromium({ width: 1480, height: 760 }); // keeps the picture small
   try {
     const page = browser.page;
     await page.goto(server.url);

@@ -150,11 +150,11 @@ export function buildDemoWorkbook(csvText: string, notice: string): DemoWorkbook
     DEMO_PERIOD,
   );
   const readme: RawCellContent[][] = readmeLines(notice).map((line) => [line]);
-  const widths: Record<number, number> = { 0: 66, [L.labelCol - 1]: 18, [L.labelCol]: 150 };
+  const widths: Record<number, number> = { 0: 66, [L.labelCol - 1]: 18, [L.labelCol]: 130 };
   for (let c = 1; c <= productCount; c++) widths[c] = 84;
   for (let k = 0; k < 2 * productCount; k++) widths[L.firstValueCol + k] = 92;
-  // The review list's status words ("worse than seasonal naive") read in full.
-  widths[L.firstValueCol] = 170;
+  // The review list's status words ("forecast too low") read in full; product names beside them.
+  widths[L.firstValueCol] = 118;
   return {
     sheets: { [SALES_SHEET]: sales, [CORRECTIONS_SHEET]: corrections.cells, [README_SHEET]: readme },
     productCount,
