@@ -99,11 +99,11 @@ export function fitConstants(
 }
 
 /** Coarse grid over the box plus the usual starting point, best first. */
-function gridCandidates(objective: (x: ArrayLike<number>) => number, axes: Axis[]): { x: Float64Array; fx: number }[] {
+function gridCandidates(objective: (x: ArrayLike<number>) => number, axes: Axis[]): { x: Float64Array; fx: number; usual?: boolean }[] {
   const d = axes.length;
-  const candidates: { x: Float64Array; fx: number }[] = [];
+  const candidates: { x: Float64Array; fx: number; usual?: boolean }[] = [];
   const usual = Float64Array.from(axes.map((a) => a.usual));
-  candidates.push({ x: usual, fx: objective(usual) });
+  candidates.push({ x: usual, fx: objective(usual), usual: true });
   const counter = new Array<number>(d).fill(0);
   for (;;) {
     const x = Float64Array.from(axes.map((a, i) => a.grid[counter[i]]));
@@ -123,7 +123,10 @@ export function minimiseWithGradient(
   const lower = axes.map((a) => a.lower);
   const upper = axes.map((a) => a.upper);
   const usual = Float64Array.from(axes.map((a) => a.usual));
-  const starts = [usual, ...gridCandidates(objective, axes).slice(0, START_POINTS).map((c) => c.x)];
+  // The usual point competes among the grid's candidates; when it ranks, its descent is the one
+  // already started (a second would retrace it step for step).
+  const ranked = gridCandidates(objective, axes).slice(0, START_POINTS);
+  const starts = [usual, ...ranked.filter((c) => !c.usual).map((c) => c.x)];
   const found: Minimum[] = [];
   // A descent that walks into the basin of an optimum already found is stopped early:
   // it would only find the same point again.
