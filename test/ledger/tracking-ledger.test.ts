@@ -8,7 +8,7 @@
  * barrels, +40% from July 2025) is flagged in its last rows; a steady product keeps the rose
  * shading rare; the panel's sentence says which.
  */
-import { describeLedger } from "../../src/ledger";
+import { describeLedger, extendLedger, hyperFormulaReader, verifyLedger } from "../../src/ledger";
 import { signalNote } from "../../src/taskpane/panel/signalNote";
 import { demoSeries } from "./support/cases";
 import { sourcedLedger } from "./support/sourced";
@@ -75,5 +75,16 @@ describe("the ledger's tracking signal", () => {
     const d = describeLedger({ history, name: "Seed trays", settings: { period: 12 }, horizon: 3, coverage: 0.9, anchor });
     expect(d.tracking.latest).toBeNull();
     expect(signalNote(d)).toMatch(/not yet defined/);
+  });
+
+  it("says once, with what to do, when a ledger holds the earlier running-sum signal columns", () => {
+    const l = ledgerOf("Seed trays");
+    // An earlier Ebb headed the first signal column "Errors so far" (the running sum since the first update).
+    l.hf.setCellContents({ sheet: l.ledgerSheet, row: l.desc.layout.updates.headerRow, col: l.cols.errorSum! }, [["Errors so far"]]);
+    const report = verifyLedger(hyperFormulaReader(l.hf, anchor.sheet), anchor);
+    expect(report.ok).toBe(false);
+    expect(report.problems).toHaveLength(1);
+    expect(report.problems[0].message).toMatch(/written by an earlier Ebb: its tracking signal is the running sum .*Write the ledger again/);
+    expect(() => extendLedger(hyperFormulaReader(l.hf, anchor.sheet), anchor, [1000])).toThrow(/written by an earlier Ebb/);
   });
 });

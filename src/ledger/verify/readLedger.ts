@@ -1,7 +1,7 @@
 import { badInput, modelShape, type ModelShape, type Seasonality, type TrendKind } from "../../engine";
 import { MAX_ROWS, parseCell } from "../describe/addresses";
 import { ledgerGeometry, SETTING_KEYS, startRowCount, type Geometry } from "../describe/layout";
-import { START_COLUMNS } from "../describe/labels";
+import { START_COLUMNS, UPDATE_COLUMNS } from "../describe/labels";
 import { parseReasonFormula, parseSourceFormula } from "../describe/sourceCells";
 import type { HistorySource, LedgerAnchor, LedgerInput, SettingKey } from "../describe/types";
 import type { LedgerReader } from "./reader";
@@ -63,6 +63,7 @@ export function readLedger(read: LedgerReader, anchor: LedgerAnchor): ReadLedger
   // A corrected ledger has its correction column right after the actual.
   const corrected = read(plain.start.header, plain.start.cols.actual! + 1).value === START_COLUMNS.correction.label;
   const g = corrected ? ledgerGeometry(r0, c0, { model: shape, horizon, updateRows: startRowCount(shape), corrections: true }) : plain;
+  refuseEarlierSignal(read, g.updates.header, g.updates.cols.errorSum!, anchor);
   // The history's cells, from the first start-table actual that still refers to one.
   let source: HistorySource | undefined;
   for (let t = 0; t < shape.startWindow && !source; t++) source = parseSourceFormula(read(g.start.first + t, g.start.cols.actual!).formula, t);
@@ -115,4 +116,20 @@ export function readLedger(read: LedgerReader, anchor: LedgerAnchor): ReadLedger
       : {}),
   };
   return { input, shape, geometry: g, inUse, written, settingCells, lastRow };
+}
+
+/** The first tracking-signal column's heading when the signal was the running sum (ledgers written before the windowed signal). */
+const RUNNING_SIGNAL_HEADING = "Errors so far";
+
+/**
+ * A ledger written before the windowed tracking signal holds running-sum columns: checking it
+ * against today's formulas would report every row. Say so once, with what to do.
+ */
+function refuseEarlierSignal(read: LedgerReader, row: number, col: number, anchor: LedgerAnchor): void {
+  const heading = read(row, col).value;
+  if (heading === UPDATE_COLUMNS.errorSum.label || heading !== RUNNING_SIGNAL_HEADING) return;
+  throw badInput(
+    "earlier-signal",
+    `The ledger at ${anchor.sheet}!${anchor.cell} was written by an earlier Ebb: its tracking signal is the running sum ("${RUNNING_SIGNAL_HEADING}"), which grows with time. Write the ledger again from its history (on a new sheet) to get the windowed signal; this one is left as it is.`,
+  );
 }
