@@ -51,7 +51,7 @@ describeWithChromium("signals in the preview (Chromium)", () => {
     expect(await page.textContent("#ebb-message")).toMatch(/Tracking signal \d+\.\d\d, beyond \+\/-2\.2: the latest forecasts ran low .*review this item; \d+ update rows flagged\./);
     const layout = await page.evaluate(() => {
       const d = (window as unknown as { ebbPreview: { port: { lastLedger: { layout: unknown } } } }).ebbPreview.port.lastLedger;
-      return d.layout as { scorecard: Record<string, string>; updates: { columns: Record<string, number>; rows: { period: number; row: number; start: boolean }[] } };
+      return d.layout as { scorecard: Record<string, string>; updates: { headerRow: number; columns: Record<string, number>; rows: { period: number; row: number; start: boolean }[] } };
     });
     const col = letter(layout.updates.columns.tracking);
     const rows = layout.updates.rows.filter((r) => !r.start);
@@ -69,5 +69,9 @@ describeWithChromium("signals in the preview (Chromium)", () => {
     expect(Number(await page.getAttribute(`td[data-cell="${layout.scorecard.outside}"]`, "data-value"))).toBe(flagged);
     await page.click(`td[data-cell="${lastRows[lastRows.length - 1]}"]`);
     await page.screenshot({ path: join(ARTIFACTS, "preview-ledger-signal.png") });
+    // The update table's headings over the three signal columns, with the first rows where the signal is still blank.
+    await page.click(`td[data-cell="${col}${layout.updates.headerRow + 1}"]`);
+    expect(await page.textContent(`td[data-cell="${col}${layout.updates.headerRow + 1}"]`)).toBe("Tracking signal");
+    await page.screenshot({ path: join(ARTIFACTS, "preview-ledger-signal-header.png") });
   });
 });
