@@ -1,9 +1,11 @@
 /**
  * Renders one ledger to PNG for review (not a test): writes the .xlsx, lets LibreOffice
  * recompute and print it to PDF, then pdftoppm turns the first pages into images:
- *   npx tsx test/ledger/render-ledger-png.ts
- * Output: test-artifacts/ledger.png (settings, scorecard, outlook, start) and
- * test-artifacts/ledger-updates.png (the update rows). Needs soffice and pdftoppm (poppler-utils).
+ *   npx tsx test/ledger/render-ledger-png.ts ["Rain barrels"]
+ * (a demo product's name, Seed trays by default). Output: test-artifacts/ledger.png (settings,
+ * scorecard, outlook, start), test-artifacts/ledger-updates.png (the first update rows) and
+ * test-artifacts/ledger-last.png (the last page: the latest rows and their tracking-signal
+ * shading as LibreOffice draws the conditional format). Needs soffice and pdftoppm (poppler-utils).
  */
 import ExcelJS from "exceljs";
 import { execFileSync } from "child_process";
@@ -19,9 +21,10 @@ import { convertWithLibreOffice, findSoffice } from "./support/libreoffice";
 async function main(): Promise<void> {
   const soffice = findSoffice();
   if (!soffice) throw new Error("soffice (LibreOffice) is needed to render the ledger.");
+  const product = process.argv[2] ?? "Seed trays";
   const desc = describeLedger({
-    history: demoSeries("Seed trays"),
-    name: "Seed trays (units), Larkmere Garden Supply (invented data)",
+    history: demoSeries(product),
+    name: `${product}, Larkmere Garden Supply (invented data)`,
     settings: { period: 12, seasonality: "multiplicative", trend: "damped" },
     horizon: 12,
     coverage: 0.9,
@@ -38,13 +41,14 @@ async function main(): Promise<void> {
   const xlsx = join(dir, "ledger.xlsx");
   await wb.xlsx.writeFile(xlsx);
   const pdf = convertWithLibreOffice(soffice, xlsx, "pdf", dir);
-  execFileSync("pdftoppm", ["-png", "-r", "60", "-f", "1", "-l", "2", pdf, join(dir, "page")]);
+  execFileSync("pdftoppm", ["-png", "-r", "60", pdf, join(dir, "page")]);
   const pages = readdirSync(dir).filter((f) => f.startsWith("page") && f.endsWith(".png")).sort();
   const out = join(__dirname, "..", "..", "test-artifacts");
   mkdirSync(out, { recursive: true });
   copyFileSync(join(dir, pages[0]), join(out, "ledger.png"));
   if (pages[1]) copyFileSync(join(dir, pages[1]), join(out, "ledger-updates.png"));
-  console.log(`Wrote ${join(out, "ledger.png")}${pages[1] ? " and ledger-updates.png" : ""} from ${pdf}`);
+  copyFileSync(join(dir, pages[pages.length - 1]), join(out, "ledger-last.png"));
+  console.log(`Wrote ${join(out, "ledger.png")}${pages[1] ? ", ledger-updates.png" : ""} and ledger-last.png (${pages.length} pages) from ${pdf}`);
 }
 
 main().catch((e) => {
