@@ -87,4 +87,14 @@ describe("the ledger's tracking signal", () => {
     expect(report.problems[0].message).toMatch(/written by an earlier Ebb: its tracking signal is the running sum .*Write the ledger again/);
     expect(() => extendLedger(hyperFormulaReader(l.hf, anchor.sheet), anchor, [1000])).toThrow(/written by an earlier Ebb/);
   });
+
+  it("a history cell that now holds text is reported as no longer a number, the period treated as missing", () => {
+    const l = ledgerOf("Seed trays");
+    const t = 60; // an update period
+    l.hf.setCellContents({ sheet: l.historySheet, row: 1 + t, col: 1 }, [["n/a"]]);
+    const report = verifyLedger(hyperFormulaReader(l.hf, anchor.sheet), anchor);
+    const p = report.problems.find((x) => x.kind === "source-changed")!;
+    expect(p.message).toMatch(/^The history cell History!B62 no longer holds a number \(it is blank or text\), so the ledger now treats the period as missing; it was written from \d+\./);
+    expect(p.message).toMatch(/type the figure back there\.$/);
+  });
 });

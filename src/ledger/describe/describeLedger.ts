@@ -12,6 +12,7 @@ import { settingsSection } from "./settingsSection";
 import { SheetCells } from "./sheet";
 import { startSection } from "./startSection";
 import { trackingSummary } from "./trackingColumns";
+import { outlookCautions } from "./outlookCautions";
 import type { LedgerDescription, LedgerInput } from "./types";
 import { updatesSection } from "./updatesSection";
 
@@ -88,6 +89,7 @@ export function describeLedger(input: LedgerInput): LedgerDescription {
     ...(corrections ? { corrections: { ...corrections, values: [...corrections.values], reasons: [...corrections.reasons] } } : {}),
     dataScale: f.scale,
     tracking: trackingSummary(f.tracking),
+    cautions: outlookCautions(f),
     ...(input.source ? { source: { ...input.source } } : {}),
     name,
     cells: cells.all(),

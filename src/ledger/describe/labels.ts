@@ -94,14 +94,14 @@ export const UPDATE_COLUMNS = {
     noteMult: "gamma x actual / level + (1 - gamma) x index one season back. Missing actual: index one season back.",
     noteAdd: "gamma x (actual - level) + (1 - gamma) x index one season back. Missing actual: index one season back.",
   },
-  errorSum: { label: `Errors, last ${W}`, note: `Sum of the errors in this row and the ${W - 1} above it (the signal's window; blanks add nothing).` },
+  errorSum: { label: `Sum of errors, last ${W}`, note: `Sum of the errors in this row and the ${W - 1} above it (the signal's window; blanks add nothing).` },
   mad: {
     label: "MAD before them",
     note: `Mean of the absolute errors above the window, from the first update on: the errors' usual size before the latest ${W}. Blank until ${BASE} errors precede the window.`,
   },
   tracking: {
     label: "Tracking signal",
-    note: `Errors, last ${W} / (sqrt(pi/2) x MAD before them x sqrt(errors in the window)): about a standard normal figure when the forecasts are unbiased. Beyond -${LIM} or +${LIM} (about 3 rows in 100 by chance) it is flagged: the latest forecasts lean one way.`,
+    note: `Sum of errors, last ${W} / (sqrt(pi/2) x MAD before them x sqrt(errors in the window)): about a standard normal figure when the forecasts are unbiased. Beyond -${LIM} or +${LIM} (about 3 rows in 100 by chance) it is flagged: the latest forecasts lean one way.`,
   },
   correction: {
     label: "Correction",

@@ -299,6 +299,8 @@ export interface LedgerDescription {
   source?: HistorySource;
   /** The corrections as written (undefined: a ledger without correction columns). */
   corrections?: import("./correctedInput").CorrectionFigures;
+  /** Cautions about the outlook a planner should read before it feeds orders (empty when none). */
+  cautions: string[];
   /** The tracking signal as written: its latest value (null while not yet defined) and the update rows it flags. */
   tracking: { latest: number | null; flagged: number; limit: number };
   name: string;

@@ -133,7 +133,7 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
     };
     switch (cell.kind) {
       case "formula":
-        if (found.formula === undefined) add("formula-replaced", cell.formula!, `The formula was replaced by ${show(found.value)}; it should be ${cell.formula} (value ${show(cell.value)}).`);
+        if (found.formula === undefined) add("formula-replaced", cell.formula!, `The formula was replaced by ${show(found.value)}; it should be ${cell.formula} (value ${show(cell.value)}). Type the formula back (the cells above and below hold the same formula, one row apart).`);
         else if (normaliseFormula(found.formula) !== normaliseFormula(cell.formula!)) add("formula-changed", cell.formula!, `The formula was changed; Ebb wrote ${cell.formula}.`);
         else if (!sameComputed(found.value, cell, scale)) differing.push({ cell, found });
         break;
@@ -152,7 +152,11 @@ export function verifyLedger(read: LedgerReader, anchor: LedgerAnchor): VerifyRe
         } else if (normaliseFormula(found.formula) !== normaliseFormula(cell.formula!)) {
           add("formula-changed", cell.formula!, `This ${what} should refer to its ${home} ${cell.source}; Ebb wrote ${cell.formula}.`);
         } else if (!sameConstant(found.value, cell.value)) {
-          add("source-changed", cell.value, `The ${home} ${cell.source} now holds ${show(found.value)}; the ledger was written from ${show(cell.value)} and now computes with the new figure. If the change is right, write the ledger again so its record and check follow it.`);
+          // The reference reads only numbers: a blank or text in the source cell reaches the ledger as a missing period.
+          const now = typeof found.value === "number"
+            ? `now holds ${show(found.value)}; the ledger was written from ${show(cell.value)} and now computes with the new figure`
+            : `no longer holds a number (it is blank or text), so the ledger now treats the period as missing; it was written from ${show(cell.value)}`;
+          add("source-changed", cell.value, `The ${home} ${cell.source} ${now}. If the change is right, write the ledger again so its record and check follow it; if not, type the figure back there.`);
         }
         break;
       }

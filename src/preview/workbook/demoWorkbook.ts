@@ -46,7 +46,7 @@ export const LAYOUT = {
 } as const;
 
 /** Column heads of the review list (EBB.WATCH returns these five columns, one row per product). */
-export const WATCH_HEADS = ["Status", "Tracking signal", "Bias (% of mean)", "MASE", "Outside 95% band"];
+export const WATCH_HEADS = ["Status", "Tracking signal (last 6)", "Bias, last 6 (% of mean)", "MASE, last season", "Last 6 outside 95% band"];
 
 export const FIT_LABELS = ["Seasonality", "Trend", "alpha", "beta", "gamma", "phi", "SSE", "RMSE", "AICc"];
 
@@ -162,7 +162,7 @@ export function buildDemoWorkbook(csvText: string, notice: string): DemoWorkbook
     headers: {
       [SALES_SHEET]: [
         ...headerCells(sales, [0], 0, productCount), // the product names above the actuals
-        ...headerCells(sales, [L.aheadHeadRow, L.bandHeadRow, L.fitHeadRow, L.accuracyHeadRow], L.labelCol, Infinity),
+        ...headerCells(sales, [L.aheadHeadRow, L.bandHeadRow, L.fitHeadRow, L.accuracyHeadRow, L.watchHeadRow], L.labelCol, Infinity),
       ],
     },
   };

@@ -37,7 +37,9 @@ export async function checkLedger(ctx: ActionContext): Promise<void> {
     ctx.say(`All ${report.checked} cells of the ledger on "${loc.sheet}" match the engine.${notice}`, "done");
   } else {
     const n = report.problems.length;
-    const follow = report.downstream.length ? ` ${report.downstream.length} more cell(s) differ only because they read those.` : "";
+    const d = report.downstream;
+    const named = d.slice(0, 6).join(", ") + (d.length > 6 ? `, and ${d.length - 6} more` : "");
+    const follow = d.length ? ` ${d.length} more cell${d.length > 1 ? "s" : ""} (${named}) ${d.length > 1 ? "differ" : "differs"} only because ${d.length > 1 ? "they read" : "it reads"} those; ${d.length > 1 ? "they come" : "it comes"} right when the listed cells are mended.` : "";
     ctx.say(`${n} cell${n > 1 ? "s" : ""} of the ledger on "${loc.sheet}" ${n > 1 ? "differ" : "differs"} from the engine; see the list below.${follow}`, "error");
   }
 }

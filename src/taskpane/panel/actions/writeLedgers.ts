@@ -104,7 +104,10 @@ export async function writeLedgers(ctx: ActionContext): Promise<void> {
   const last = written[written.length - 1];
   await refreshLedgerList(ctx, last ? { sheet: last.sheet, cell: last.anchor, tag: last.tag } : undefined);
   await port.select(last.sheet, last.anchor, false);
-  ctx.say(written.length === 1 ? wroteMessage(last) : `Wrote ${written.length} ledgers: ${written.map((d) => `"${d.sheet}"`).join(", ")}.`, "done");
+  // A caution about an outlook is not a plain success: it stays in the ordinary tone.
+  const cautions = written.flatMap((d) => d.cautions.map((c) => (written.length > 1 ? ` "${d.sheet}": ${c}` : "")).filter((c) => c !== ""));
+  const cautioned = written.some((d) => d.cautions.length > 0);
+  ctx.say(written.length === 1 ? wroteMessage(last) : `Wrote ${written.length} ledgers: ${written.map((d) => `"${d.sheet}"`).join(", ")}.${cautions.join("")}`, cautioned ? "plain" : "done");
 }
 
 /** The form field a refusal is about, to move the focus there. */
@@ -131,7 +134,7 @@ function wroteMessage(d: LedgerDescription): string {
   if (d.spec.trend === "damped") parts.push(`phi ${fourDecimals(k.phi)}`);
   return (
     `Wrote the ledger for "${d.name}" on the sheet "${d.sheet}" from ${d.anchor}: ${d.spec.seasonality === "none" ? "no" : d.spec.seasonality} seasonality, ${d.spec.trend === "none" ? "no" : d.spec.trend} trend, ` +
-    `season length ${d.spec.period}; ${parts.join(", ")}.${correctedNote(d)}${signalNote(d)} Change alpha or another setting in its yellow cells and every row recomputes.`
+    `season length ${d.spec.period}; ${parts.join(", ")}.${correctedNote(d)}${signalNote(d)} Change alpha or another setting in its yellow cells and every row recomputes.${d.cautions.map((c) => ` ${c}`).join("")}`
   );
 }
 
