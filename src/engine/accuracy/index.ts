@@ -11,7 +11,6 @@ export {
   windowSignal,
   windowFigures,
   type WindowFigures,
-  runningErrorSum,
   parseTrackingForm,
   trackingLimit,
   TRACKING_WINDOW,
@@ -22,7 +21,6 @@ export {
   TRACKING_FORMS,
   type TrackingForm,
 } from "./tracking";
-export { runningMad } from "./runningMad";
 export { theilU } from "./theilU";
 export { accuracyTable, type AccuracyRow } from "./table";
 export { forecastValueAdded, parseFvaMeasure, FVA_MEASURES, type FvaMeasure, type FvaResult, type FvaStep } from "./fva";

@@ -160,18 +160,3 @@ function runningSignal(errors: ArrayLike<number>): Float64Array {
   }
   return out;
 }
-
-/**
- * Running sum of errors (the running signal's numerator), one value per period; a missing
- * error (NaN) adds nothing.
- * @example runningErrorSum([1, NaN, -3]) // [1, 1, -2]
- */
-export function runningErrorSum(errors: ArrayLike<number>): Float64Array {
-  const out = new Float64Array(errors.length);
-  let sum = 0;
-  for (let i = 0; i < errors.length; i++) {
-    if (!Number.isNaN(errors[i])) sum += errors[i];
-    out[i] = sum;
-  }
-  return out;
-}
