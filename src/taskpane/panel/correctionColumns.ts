@@ -24,11 +24,10 @@ export function parseColumn(text: string, historySheet: string, what: string): C
 export type CorrectionsRead = { ok: true; corrections?: LedgerCorrections } | { ok: false; message: string };
 
 /**
- * Read the corrections (and reasons) beside a history, on its rows and as far below as `extra`
- * rows (new periods may be corrected too). A correction that is not a number is refused with its
- * address; nothing is guessed.
+ * Read the corrections (and reasons) beside a history, on its rows. A correction that is not a
+ * number is refused with its address; nothing is guessed.
  */
-export async function readCorrections(port: WorkbookPort, pick: Pick<HistoryPick, "sheet" | "firstRow" | "values">, correctionsText: string, reasonsText: string, extra = 0): Promise<CorrectionsRead> {
+export async function readCorrections(port: WorkbookPort, pick: Pick<HistoryPick, "sheet" | "firstRow" | "values">, correctionsText: string, reasonsText: string): Promise<CorrectionsRead> {
   const corr = parseColumn(correctionsText, pick.sheet, "Corrections column");
   if (!corr.ok) return corr;
   const why = parseColumn(reasonsText, pick.sheet, "Reasons column");
@@ -36,7 +35,7 @@ export async function readCorrections(port: WorkbookPort, pick: Pick<HistoryPick
   if (!corr.column) {
     return why.column ? { ok: false, message: "Reasons column: give the corrections column as well (the reasons explain the corrections)." } : { ok: true };
   }
-  const rows = pick.values.length + extra;
+  const rows = pick.values.length;
   const source: HistorySource = { sheet: corr.column.sheet, col: corr.column.col, firstRow: pick.firstRow };
   const reasonSource: HistorySource | undefined = why.column && { sheet: why.column.sheet, col: why.column.col, firstRow: pick.firstRow };
   return readCorrectionCells(port, source, reasonSource, 0, rows);

@@ -69,7 +69,7 @@ export async function writeLedgers(ctx: ActionContext): Promise<void> {
       source: { sheet: pick.sheet, col: pick.col, firstRow: pick.firstRow },
     };
     if (correcting) {
-      const read = await readCorrections(port, pick, values.correctionsColumn ?? "", values.reasonsColumn ?? "", 0);
+      const read = await readCorrections(port, pick, values.correctionsColumn ?? "", values.reasonsColumn ?? "");
       if (!read.ok) {
         ctx.say(read.message, "error");
         view.correctionsColumn.focus();
@@ -105,9 +105,9 @@ export async function writeLedgers(ctx: ActionContext): Promise<void> {
   await refreshLedgerList(ctx, last ? { sheet: last.sheet, cell: last.anchor, tag: last.tag } : undefined);
   await port.select(last.sheet, last.anchor, false);
   // A caution about an outlook is not a plain success: it stays in the ordinary tone.
-  const cautions = written.flatMap((d) => d.cautions.map((c) => (written.length > 1 ? ` "${d.sheet}": ${c}` : "")).filter((c) => c !== ""));
   const cautioned = written.some((d) => d.cautions.length > 0);
-  ctx.say(written.length === 1 ? wroteMessage(last) : `Wrote ${written.length} ledgers: ${written.map((d) => `"${d.sheet}"`).join(", ")}.${cautions.join("")}`, cautioned ? "plain" : "done");
+  const several = () => `Wrote ${written.length} ledgers: ${written.map((d) => `"${d.sheet}"`).join(", ")}.${written.flatMap((d) => d.cautions.map((c) => ` "${d.sheet}": ${c}`)).join("")}`;
+  ctx.say(written.length === 1 ? wroteMessage(last) : several(), cautioned ? "plain" : "done");
 }
 
 /** The form field a refusal is about, to move the focus there. */
