@@ -80,26 +80,19 @@ export class PreviewWorkbook {
    * names and cells), Ctrl+Z undoes it whole. Steps nest: the outermost one counts.
    */
   step<T>(fn: () => T): T {
-    if (this.stepDepth === 0) this.absorbUntracked();
+    if (this.stepDepth === 0) this.recordStep();
     this.stepDepth++;
     try {
       return fn();
     } finally {
       this.stepDepth--;
-      if (this.stepDepth === 0) {
-        const made = this.undoDepth() - this.knownDepth;
-        if (made > 0) {
-          this.done.push(made);
-          this.undone.length = 0;
-        }
-        this.knownDepth = this.undoDepth();
-      }
+      if (this.stepDepth === 0) this.recordStep();
     }
   }
 
   /** Undo the last user step; false when there is none. */
   undo(): boolean {
-    this.absorbUntracked();
+    this.recordStep();
     return this.replay(this.done, this.undone, () => this.hf.isThereSomethingToUndo(), () => this.hf.undo());
   }
 
@@ -118,8 +111,11 @@ export class PreviewWorkbook {
     return true;
   }
 
-  /** Changes made outside a step (none are expected) become a step of their own, so counts stay right. */
-  private absorbUntracked(): void {
+  /**
+   * The engine entries made since the last count become one step: at the end of a step, and
+   * before one starts or an undo (changes made outside a step, none expected, so counts stay right).
+   */
+  private recordStep(): void {
     const extra = this.undoDepth() - this.knownDepth;
     if (extra > 0) {
       this.done.push(extra);
