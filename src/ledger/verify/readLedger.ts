@@ -1,7 +1,7 @@
 import { badInput, modelShape, type ModelShape, type Seasonality, type TrendKind } from "../../engine";
 import { MAX_ROWS, parseCell } from "../describe/addresses";
 import { ledgerGeometry, SETTING_KEYS, startRowCount, type Geometry } from "../describe/layout";
-import { START_COLUMNS, UPDATE_COLUMNS } from "../describe/labels";
+import { START_COLUMNS } from "../describe/labels";
 import { parseReasonFormula, parseSourceFormula } from "../describe/sourceCells";
 import type { HistorySource, LedgerAnchor, LedgerInput, SettingKey } from "../describe/types";
 import type { LedgerReader } from "./reader";
@@ -127,7 +127,7 @@ const RUNNING_SIGNAL_HEADING = "Errors so far";
  */
 function refuseEarlierSignal(read: LedgerReader, row: number, col: number, anchor: LedgerAnchor): void {
   const heading = read(row, col).value;
-  if (heading === UPDATE_COLUMNS.errorSum.label || heading !== RUNNING_SIGNAL_HEADING) return;
+  if (heading !== RUNNING_SIGNAL_HEADING) return;
   throw badInput(
     "earlier-signal",
     `The ledger at ${anchor.sheet}!${anchor.cell} was written by an earlier Ebb: its tracking signal is the running sum ("${RUNNING_SIGNAL_HEADING}"), which grows with time. Write the ledger again from its history (on a new sheet) to get the windowed signal; this one is left as it is.`,
