@@ -4,17 +4,9 @@
  * spreadsheets with dynamic arrays). The formula engine alone keeps #SPILL! until the formula is
  * entered again, so this checks the preview's own layer (src/preview/workbook/previewWorkbook.ts).
  */
-import { createEbbWorkbook } from "../../src/functions/hyperformula";
-import { PreviewWorkbook } from "../../src/preview/workbook/previewWorkbook";
-import { readDemo } from "../functions/support/demo";
+import { aheadBook } from "./support/aheadBook";
 
-const seed = readDemo().columns[0].slice(0, 40);
-
-function book(): PreviewWorkbook {
-  const grid: (number | string | null)[][] = seed.map((v) => [v, null, null, null, null]);
-  grid[0][2] = "=EBB.AHEAD(A1:A40, 12, 6)"; // C1:C6
-  return new PreviewWorkbook(createEbbWorkbook({ S: grid as never }, {}));
-}
+const book = () => aheadBook(40);
 
 test("a number typed inside a spilled block: #SPILL! naming that cell", () => {
   const wb = book();

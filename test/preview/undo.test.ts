@@ -4,18 +4,12 @@
  * on the preview's own layer (src/preview/workbook/previewWorkbook.ts) over the formula engine;
  * expected values are the cells as this test typed them.
  */
-import { createEbbWorkbook } from "../../src/functions/hyperformula";
 import { describeLedger, writeLedgerToHyperFormula } from "../../src/ledger";
-import { PreviewWorkbook } from "../../src/preview/workbook/previewWorkbook";
 import { readDemo } from "../functions/support/demo";
+import { aheadBook } from "./support/aheadBook";
 
 const seed = readDemo().columns[0].slice(0, 48);
-
-function book(): PreviewWorkbook {
-  const grid: (number | string | null)[][] = seed.map((v) => [v, null, null, null, null]);
-  grid[0][2] = "=EBB.AHEAD(A1:A48, 12, 6)"; // C1:C6
-  return new PreviewWorkbook(createEbbWorkbook({ S: grid as never }, {}));
-}
+const book = () => aheadBook(48);
 
 test("nothing to undo in the workbook as opened", () => {
   const wb = book();
