@@ -75,12 +75,11 @@ export interface DemoStep {
 
 /** The invented step change: the review list and the ledger's tracking signal should flag rain barrels. */
 export const DEMO_STEP_PRODUCT = "Rain barrels (units)";
-const STEP: DemoStep = {
+export const DEMO_STEP: DemoStep = {
   month: "2025-07",
   factor: 1.4,
   story: "From July 2025 a garden-centre chain (invented) stocks rain barrels in all its shops: sales are about 40% higher for good.",
 };
-export const DEMO_STEP = STEP;
 
 /** Months lost to the (invented) stock-system outage; blank cells in the flower bulbs column. */
 export const DEMO_MISSING_MONTHS: readonly string[] = ["2023-05", "2023-06", "2023-07"];
@@ -141,14 +140,14 @@ const RECIPES: Recipe[] = [
   },
   {
     // Summer item whose demand stepped up for good: a new customer from mid-2025 (see DEMO_STEP).
-    name: "Rain barrels (units)",
+    name: DEMO_STEP_PRODUCT,
     seasonality: "multiplicative",
     level: 350,
     growth: 0.02,
     shape: [0.4, 0.5, 0.85, 1.3, 1.6, 1.7, 1.55, 1.25, 0.9, 0.7, 0.6, 0.55],
     noise: 0.06,
     yearShock: 0.03,
-    step: STEP,
+    step: DEMO_STEP,
   },
 ];
 
