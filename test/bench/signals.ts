@@ -88,14 +88,13 @@ function errorScale(model: FittedModel): { relative: boolean; sd: number } {
   return model.spec.seasonality === "multiplicative" ? { relative: true, sd: oneStepRelativeSd(model) } : { relative: false, sd: Math.sqrt(oneStepVariance(model)) };
 }
 
-/** The planner's model (fitted on the first `until` periods) run with its constants over the whole of `y`: its one-step errors. */
-function frozenErrors(y: Float64Array, until: number, period: number): { errors: Float64Array; forecast: Float64Array; model: FittedModel } {
-  const model = fitModel(y.subarray(0, until), { period, ...AUTO });
-  const { seasonality, trend } = model.spec;
+/** The planner's model (fitted before the step) run with its constants over the whole of `y`: its one-step errors and forecasts. */
+function frozenErrors(y: Float64Array, model: FittedModel): { errors: Float64Array; forecast: Float64Array } {
+  const { period, seasonality, trend } = model.spec;
   const k = model.constants;
   const run = fitModel(y, { period, seasonality, trend, alpha: k.alpha, beta: k.beta, gamma: k.gamma, phi: k.phi });
   const states = modelStates(run);
-  return { errors: states.error, forecast: states.forecast, model };
+  return { errors: states.error, forecast: states.forecast };
 }
 
 /** First period (1-based count from the step) in [0, FLAG_WITHIN) whose signal is above the limit, or 0. */
@@ -162,12 +161,16 @@ export function runSignalSimulation(sources: M3Series[], progress: Progress): Si
     let clean: ReturnType<typeof frozenErrors>;
     let stepped: ReturnType<typeof frozenErrors>;
     let whole: FittedModel;
-    const planner = errorScale(fitModel(y.subarray(0, at), { period: src.period, ...AUTO }));
-    const withStep = Float64Array.from(y, (v, t) => (t < at ? v : planner.relative ? v * (1 + STEP_SIZE * planner.sd) : v + STEP_SIZE * planner.sd));
+    let before: FittedModel;
+    let planner: ReturnType<typeof errorScale>;
     try {
+      // The planner's model: fitted once on the path before the step, then kept while it updates.
+      before = fitModel(y.subarray(0, at), { period: src.period, ...AUTO });
+      planner = errorScale(before);
+      const withStep = Float64Array.from(y, (v, t) => (t < at ? v : planner.relative ? v * (1 + STEP_SIZE * planner.sd) : v + STEP_SIZE * planner.sd));
       whole = fitModel(y, { period: src.period, ...AUTO });
-      clean = frozenErrors(y, at, src.period);
-      stepped = frozenErrors(withStep, at, src.period);
+      clean = frozenErrors(y, before);
+      stepped = frozenErrors(withStep, before);
     } catch {
       return;
     }
@@ -184,7 +187,7 @@ export function runSignalSimulation(sources: M3Series[], progress: Progress): Si
     count(run.chance, delay(windowSignal(clean.errors), at));
     const levelDelay = delay(windowSignal(stepped.errors), at);
     count(run.level, levelDelay);
-    const band = stepped.model.constants.alpha < 0.3 ? run.levelLowAlpha : run.levelHighAlpha;
+    const band = before.constants.alpha < 0.3 ? run.levelLowAlpha : run.levelHighAlpha;
     band.series++;
     count(band, levelDelay);
     // A lasting bias: the clean errors shifted by the step from `at` on.
