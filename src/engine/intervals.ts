@@ -1,4 +1,5 @@
 import normalQuantile from "@stdlib/stats-base-dists-normal-quantile";
+import studentQuantile from "@stdlib/stats-base-dists-t-quantile";
 import { badInput } from "./errors";
 import { checkHorizon, forecastModel } from "./model";
 import { trendMultipliers } from "./recursion";
@@ -29,13 +30,17 @@ export function coverageZ(coverage: number): number {
  * Prediction intervals for the next `horizon` periods.
  * Additive or no seasonality: the analytic variance of Hyndman, Koehler, Ord & Snyder (2008),
  * Forecasting with Exponential Smoothing, ch. 6 (class 1 models):
- *   v_h = sigma^2 * (1 + sum_{j=1}^{h-1} c_j^2),  c_j = alpha + beta* phi_j + gamma* d_{j,p},
+ *   v_h = s^2 * (1 + sum_{j=1}^{h-1} c_j^2),  c_j = alpha + beta* phi_j + gamma* d_{j,p},
  * with phi_j = phi + ... + phi^j (j for an undamped trend), d_{j,p} = 1 when p divides j, and
  * the classic recursions mapped to their error-correction form: beta* = alpha*beta,
- * gamma* = gamma*(1-alpha) (the seasonal update on the new level). sigma^2 = SSE / (errors - estimated quantities).
+ * gamma* = gamma*(1-alpha) (the seasonal update on the new level).
+ * That formula takes the constants and states as known. They are estimated, so the interval is
+ * widened as a regression's prediction interval is (see `forecastVariance` and
+ * `intervalQuantile`): s^2 is the forecast variance, the one-step variance times 1 + k/n, and
+ * the half-width is a Student t quantile on n - k degrees of freedom times sqrt(v_h).
  * Multiplicative seasonality: a seeded simulation of the fitted recursions with Gaussian
- * relative errors (sigma from the one-step relative errors), 2000 Latin hypercube paths
- * (simulate.ts), empirical quantiles.
+ * relative errors, 2000 Latin hypercube paths (simulate.ts), empirical quantiles; the relative
+ * sd is widened by the same two factors, sqrt(1 + k/n) and t / z.
  */
 export function predictionInterval(model: FittedModel, horizon: number, coverage = 0.95): Interval {
   checkHorizon(horizon);
@@ -46,8 +51,8 @@ export function predictionInterval(model: FittedModel, horizon: number, coverage
   const forecast = forecastModel(model, horizon);
   if (model.spec.seasonality === "multiplicative") return simulated(model, forecast, coverage);
   const { sumSquares } = additiveIntervalWeights(model, horizon);
-  const sigma2 = oneStepVariance(model);
-  const z = coverageZ(coverage);
+  const sigma2 = forecastVariance(model);
+  const z = intervalQuantile(model, coverage);
   const low = new Float64Array(horizon);
   const high = new Float64Array(horizon);
   for (let h = 1; h <= horizon; h++) {
@@ -93,6 +98,43 @@ export function oneStepRelativeSd(model: FittedModel): number {
 }
 
 /**
+ * The one-step variance widened for the estimated constants and starting states: times
+ * 1 + k/n, with n one-step errors and k estimated quantities (varianceDivisor). k/n is the mean
+ * leverage of a least-squares fit with k parameters on n points, so this is the mean of the
+ * regression prediction variance s^2 (1 + x'(X'X)^-1 x) over the fitted points, and s^2 (n+k)/(n-k)
+ * over n is Akaike's final prediction error (Akaike 1970, "Statistical predictor identification",
+ * Ann. Inst. Stat. Math. 22). Short histories with many parameters get the wider interval they need.
+ */
+export function estimationFactor(model: FittedModel): number {
+  return 1 + estimatedQuantities(model.shape) / Math.max(1, model.errorCount);
+}
+
+/** Variance of a new one-step error (additive models): sigma^2 * estimationFactor. */
+export function forecastVariance(model: FittedModel): number {
+  return oneStepVariance(model) * estimationFactor(model);
+}
+
+/** Sd of a new one-step relative error (multiplicative models): the relative sd * sqrt(estimationFactor). */
+export function forecastRelativeSd(model: FittedModel): number {
+  return oneStepRelativeSd(model) * Math.sqrt(estimationFactor(model));
+}
+
+/**
+ * Quantile for a two-sided interval: Student's t at 0.5 + coverage/2 on the variance's degrees
+ * of freedom (varianceDivisor), as the variance is itself estimated (common practice for
+ * regression prediction intervals). 2.0518 for 0.95 on 27 degrees (qt(0.975, 27) in base R);
+ * it approaches coverageZ as the history grows.
+ */
+export function intervalQuantile(model: FittedModel, coverage: number): number {
+  return errorQuantile(model, 0.5 + checkCoverage(coverage) / 2);
+}
+
+/** The one-sided quantile of a new error in sds: Student's t at `probability` on varianceDivisor(model) degrees. */
+export function errorQuantile(model: FittedModel, probability: number): number {
+  return studentQuantile(probability, varianceDivisor(model));
+}
+
+/**
  * Divisor of the error variance: the number of one-step errors less the quantities the model
  * estimates (as the forecast package for R does for its state-space models, Hyndman &
  * Khandakar 2008, J. Stat. Software 27(3)), so that short histories with many parameters do
@@ -115,7 +157,8 @@ function simulated(model: FittedModel, forecast: Float64Array, coverage: number)
   const low = new Float64Array(horizon);
   const high = new Float64Array(horizon);
   const q = (1 - coverage) / 2;
-  simulateFuture(model, oneStepRelativeSd(model), horizon, INTERVAL_PATHS, (h, step) => {
+  const sigma = forecastRelativeSd(model) * (intervalQuantile(model, coverage) / coverageZ(coverage));
+  simulateFuture(model, sigma, horizon, INTERVAL_PATHS, (h, step) => {
     [low[h - 1], high[h - 1]] = quantilePair(step, q);
     if (!Number.isFinite(low[h - 1]) || !Number.isFinite(high[h - 1])) throw simulationBreakdown("interval");
   });

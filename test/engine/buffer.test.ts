@@ -8,8 +8,9 @@
  * - Multiplicative models: against a seeded simulation written here (its own generator and
  *   100,000 paths), to 4% of the variance (the engine's 20,000-path estimate has a relative
  *   standard error near 1%, this one near 0.5%).
- * - Safety stock: a hand computation, with standard normal quantiles from a printed table
- *   (common practice: z = 1.2816, 1.6449, 2.3263 for 90%, 95%, 99%).
+ * - Safety stock: a hand computation, with the Student t quantiles of base R's qt on the
+ *   variance's degrees of freedom (k = 1.2922, 1.6641, 2.3739 for 90%, 95%, 99% on 80 degrees;
+ *   a printed normal table's 1.2816, 1.6449, 2.3263 are their limit for a long history).
  */
 import { fitModel, leadTimeDemand, predictionInterval, stockBuffer, type FittedModel } from "../../src/engine";
 import { readDemo } from "../functions/support/demo";
@@ -33,11 +34,21 @@ function weights(m: FittedModel, H: number): number[] {
   return c;
 }
 
-/** sigma^2 as the intervals take it: SSE over the errors less the quantities estimated. */
-function sigma2(m: FittedModel): number {
-  const estimated = 2 + (m.spec.trend !== "none" ? 2 : 0) + (m.spec.trend === "damped" ? 1 : 0) + (m.spec.seasonality !== "none" ? m.spec.period : 0);
-  return m.sse / Math.max(1, m.errorCount - estimated);
+/** Quantities the model estimates: alpha, level, (beta, trend), (phi), (gamma and p - 1 free indices). */
+function estimated(m: FittedModel): number {
+  return 2 + (m.spec.trend !== "none" ? 2 : 0) + (m.spec.trend === "damped" ? 1 : 0) + (m.spec.seasonality !== "none" ? m.spec.period : 0);
 }
+
+/**
+ * sigma^2 as the intervals take it: SSE over the errors less the quantities estimated, widened
+ * by 1 + k/n for the estimated quantities (Akaike's final prediction error, the mean leverage).
+ */
+function sigma2(m: FittedModel): number {
+  return (m.sse / Math.max(1, m.errorCount - estimated(m))) * (1 + estimated(m) / m.errorCount);
+}
+
+/** Student t quantiles qt(0.975, df) from base R 4.2, for the degrees of freedom of the cases here. */
+const T975: Record<number, number> = { 43: 2.01669219923, 44: 2.01536757444, 80: 1.99006342125 };
 
 /** Cov(e_h, e_k) = sigma^2 sum_i c_{h-i} c_{k-i}; the variance of the sum is the sum of all entries. */
 function covarianceMatrix(m: FittedModel, H: number): number[][] {
@@ -116,10 +127,12 @@ describe("lead-time variance, additive models: the sum of the h-step variances a
     const lt = leadTimeDemand(m, L);
     expect(lt.method).toBe("analytic");
     expect(Math.abs(lt.variance - sumAll(cov))).toBeLessThanOrEqual(1e-9 * sumAll(cov));
-    // the diagonal is the intervals' own h-step variance: half-width / z, squared (z = 1.959964, table)
+    // the diagonal is the intervals' own h-step variance: half-width / t, squared (t on n - k degrees)
     const band = predictionInterval(m, L, 0.95);
+    const t = T975[m.errorCount - estimated(m)];
+    expect(t).toBeDefined();
     for (let h = 0; h < L; h++) {
-      const v = ((band.high[h] - band.low[h]) / 2 / 1.959964) ** 2;
+      const v = ((band.high[h] - band.low[h]) / 2 / t) ** 2;
       expect(Math.abs(v - cov[h][h]) / cov[h][h]).toBeLessThan(1e-6);
     }
     // the covariances matter: never below the shortcut sigma^2 * L, and above it once alpha > 0
@@ -150,7 +163,7 @@ describe("lead-time variance, multiplicative models: against a seeded simulation
   ];
   test.each(cases)("%s: within 4%", (_, name, options, L) => {
     const m = fitModel(column(name), options);
-    const sigma = Math.sqrt(m.relativeSse / (m.errorCount - (2 + (m.spec.trend !== "none" ? 2 : 0) + (m.spec.trend === "damped" ? 1 : 0) + 12)));
+    const sigma = Math.sqrt((m.relativeSse / (m.errorCount - estimated(m))) * (1 + estimated(m) / m.errorCount));
     const steps = simulate(m, L, 100000, sigma, 4242);
     const lt = leadTimeDemand(m, L);
     expect(lt.method).toBe("simulated");
@@ -178,24 +191,26 @@ describe("safety stock and reorder point", () => {
 
   test("hand computation: L = 3, 95% cycle service level", () => {
     // c_j = alpha = 0.2, so the shocks of the three periods carry weights 1.4, 1.2 and 1:
-    // sd = sigma * sqrt(1.96 + 1.44 + 1) = sigma * sqrt(4.4); k = 1.6449 (normal table, common practice);
+    // sd = sigma * sqrt(1.96 + 1.44 + 1) = sigma * sqrt(4.4); k = qt(0.95, 80) = 1.66412 (base R 4.2:
+    // Student t on the variance's 82 - 2 degrees; the normal table's 1.6449 for a long history);
     // safety stock = k * sd; reorder point = 3 x the level forecast + safety stock
     // (Silver, Pyke & Thomas 2017: s = forecast over L + k sigma_L).
     const b = stockBuffer(m, { leadTime: 3, serviceLevel: 0.95 });
     expect(b.sd / sigma).toBeCloseTo(Math.sqrt(4.4), 12);
-    expect(b.z).toBeCloseTo(1.6449, 4);
-    expect(b.safetyStock / sigma).toBeCloseTo(1.6449 * Math.sqrt(4.4), 3); // 3.4503
+    expect(m.errorCount - estimated(m)).toBe(80);
+    expect(b.z).toBeCloseTo(1.66412457859, 9);
+    expect(b.safetyStock / sigma).toBeCloseTo(1.66412457859 * Math.sqrt(4.4), 9); // 3.4906
     expect(b.forecast).toBeCloseTo(3 * m.final.level, 9);
     expect(b.reorderPoint).toBeCloseTo(3 * m.final.level + b.safetyStock, 9);
   });
 
   test("with a review period the protection interval is R + L", () => {
-    // L = 2, R = 1: the same three periods as above, so the same spread; 90%: k = 1.2816
+    // L = 2, R = 1: the same three periods as above, so the same spread; 90%: k = qt(0.9, 80) = 1.29222 (base R)
     const b = stockBuffer(m, { leadTime: 2, reviewPeriod: 1, serviceLevel: 0.9 });
     expect(b.periods).toBe(3);
     expect(b.sd / sigma).toBeCloseTo(Math.sqrt(4.4), 12);
-    expect(b.z).toBeCloseTo(1.2816, 4);
-    expect(stockBuffer(m, { leadTime: 3, serviceLevel: 0.99 }).z).toBeCloseTo(2.3263, 4);
+    expect(b.z).toBeCloseTo(1.29222358306, 9);
+    expect(stockBuffer(m, { leadTime: 3, serviceLevel: 0.99 }).z).toBeCloseTo(2.37386827297, 9); // qt(0.99, 80)
   });
 
   test("bad settings get a message that says what to type", () => {

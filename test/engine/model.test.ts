@@ -197,9 +197,10 @@ describe("automatic choice of seasonality and trend", () => {
 });
 
 describe("prediction intervals", () => {
-  // Normal quantiles from published tables (Abramowitz & Stegun 1964, table 26.5).
-  const Z975 = 1.959963984540054;
-  const Z90 = 1.2815515655446004;
+  // Student t quantiles on 104 degrees of freedom (the additive AirPassengers fit: 120 one-step
+  // errors less 4 + 12 estimated quantities), from base R 4.2: qt(0.975, 104), qt(0.9, 104).
+  const T975 = 1.98303752648;
+  const T90 = 1.28974481603;
 
   it("additive: analytic widths (Hyndman, Koehler, Ord & Snyder 2008, ch. 6) grow with the horizon; 0.8 is narrower than 0.95", () => {
     const model = fitModel(AIR, { period: P, seasonality: "additive" });
@@ -211,8 +212,8 @@ describe("prediction intervals", () => {
       expect(wide.high[i] - wide.forecast[i]).toBeCloseTo(wide.forecast[i] - wide.low[i], 8); // symmetric
       if (i > 0) expect(width(i)).toBeGreaterThanOrEqual(width(i - 1));
       expect(narrow.high[i] - narrow.low[i]).toBeLessThan(width(i));
-      // same variance, so the half-widths are in the ratio of the normal quantiles
-      expect((narrow.high[i] - narrow.low[i]) / width(i)).toBeCloseTo(Z90 / Z975, 10);
+      // same variance, so the half-widths are in the ratio of the t quantiles
+      expect((narrow.high[i] - narrow.low[i]) / width(i)).toBeCloseTo(T90 / T975, 9);
     }
     expect(width(h - 1)).toBeGreaterThan(width(0));
     // v_h = sigma^2 (1 + sum_{j<h} c_j^2), c_j = alpha + alpha*beta*j + gamma*(1-alpha)*[j multiple of p]:
@@ -221,13 +222,17 @@ describe("prediction intervals", () => {
     const { alpha, beta, gamma } = model.constants;
     // sigma^2: SSE over the errors less the estimated quantities (Hyndman & Khandakar 2008):
     // alpha, beta, gamma, start level, start trend and p-1 free start indices = 2 + 2 + P
-    const sigma2 = model.sse / (model.errorCount - (2 + 2 + P));
+    const k = 2 + 2 + P;
+    expect(model.errorCount).toBe(120);
+    const sigma2 = model.sse / (model.errorCount - k);
+    // widened for the estimated quantities by 1 + k/n, the mean leverage (Akaike's final prediction error)
+    const forecastVariance = sigma2 * (1 + k / model.errorCount);
     const variance = (hh: number) => {
       let s = 0;
       for (let j = 1; j < hh; j++) s += (alpha + alpha * beta * j + (j % P === 0 ? gamma * (1 - alpha) : 0)) ** 2;
-      return sigma2 * (1 + s);
+      return forecastVariance * (1 + s);
     };
-    for (const hh of [1, 2, 13, 25]) expect(wide.high[hh - 1] - wide.forecast[hh - 1]).toBeCloseTo(Z975 * Math.sqrt(variance(hh)), 6);
+    for (const hh of [1, 2, 13, 25]) expect(wide.high[hh - 1] - wide.forecast[hh - 1]).toBeCloseTo(T975 * Math.sqrt(variance(hh)), 6);
   });
 
   it("multiplicative: the simulated interval is the same on every run, brackets the forecast, and 0.8 is narrower", () => {

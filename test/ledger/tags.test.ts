@@ -6,6 +6,7 @@
  * Expected values: the sheets this test wrote.
  */
 import { HyperFormula } from "hyperformula";
+import { registerStudentQuantile } from "../../src/functions/hyperformula";
 import { defaultTag, describeLedger, hyperFormulaReader, uniqueTag, verifyLedger, writeLedgerToHyperFormula } from "../../src/ledger";
 import { demoSeries } from "./support/cases";
 
@@ -20,6 +21,7 @@ describe("ledger name tags", () => {
   });
 
   it("keeps each ledger's names on its own sheet when both are in one workbook", () => {
+    registerStudentQuantile(); // as the preview does: T.INV to full precision
     const hf = HyperFormula.buildEmpty({ licenseKey: "gpl-v3" });
     const sheets = ["Ledger Widget 100 blue", "Ledger Widget 100 red"];
     const taken: string[] = [];

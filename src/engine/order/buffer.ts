@@ -1,5 +1,5 @@
-import normalQuantile from "@stdlib/stats-base-dists-normal-quantile";
 import { badInput } from "../errors";
+import { errorQuantile } from "../intervals";
 import type { FittedModel } from "../types";
 import { leadTimeDemand, type LeadTimeDemand } from "./leadTime";
 
@@ -17,7 +17,7 @@ export interface StockBuffer extends LeadTimeDemand {
   leadTime: number;
   reviewPeriod: number;
   serviceLevel: number;
-  /** Standard normal quantile of the service level (the safety factor k). */
+  /** Quantile of the service level, the safety factor k: Student t on the variance's degrees of freedom (errorQuantile). */
   z: number;
   safetyStock: number;
   /** Forecast demand over the protection interval plus safety stock. */
@@ -28,12 +28,13 @@ export interface StockBuffer extends LeadTimeDemand {
  * Safety stock and reorder point for a cycle service level, from the model's own lead-time error
  * (Silver, Pyke & Thomas 2017, Inventory and Production Management in Supply Chains, 4th ed.,
  * the chapters on individual items with probabilistic demand, cited from memory: safety stock =
- * k * sigma_L, reorder point s = forecast over L + k * sigma_L, with k the standard normal quantile
- * of the cycle service level; for periodic review the protection interval is R + L and the
+ * k * sigma_L, reorder point s = forecast over L + k * sigma_L, with k the quantile of the cycle
+ * service level: Student's t on the variance's degrees of freedom, as the intervals take it
+ * (intervalQuantile), which is the standard normal quantile once the history is long; for periodic review the protection interval is R + L and the
  * figure is the order-up-to level). sigma_L comes from
  * `leadTimeDemand`, which sums the h-step variances and their covariances (Hyndman et al. 2008).
  *
- * Example (hand computation, common practice for z): forecast 100 a period, L = 3, sigma_L = 20.98
+ * Example (hand computation, common practice for k; the normal quantile, for a long history): forecast 100 a period, L = 3, sigma_L = 20.98
  * (see leadTimeDemand), 95% cycle service level: k = 1.6449, safety stock 34.50, reorder point 334.50.
  */
 export function stockBuffer(model: FittedModel, settings: BufferSettings): StockBuffer {
@@ -44,7 +45,7 @@ export function stockBuffer(model: FittedModel, settings: BufferSettings): Stock
     throw badInput("bad-lead-time", `Lead time plus review period must be at most 1000 periods; got ${leadTime + reviewPeriod}.`);
   }
   const demand = leadTimeDemand(model, leadTime + reviewPeriod);
-  const z = normalQuantile(serviceLevel, 0, 1);
+  const z = errorQuantile(model, serviceLevel);
   const safetyStock = z * demand.sd;
   return { ...demand, leadTime, reviewPeriod, serviceLevel, z, safetyStock, reorderPoint: demand.forecast + safetyStock };
 }

@@ -1,6 +1,6 @@
 import { badInput } from "../errors";
 import { checkHorizon, forecastModel } from "../model";
-import { additiveIntervalWeights, oneStepRelativeSd, oneStepVariance, simulationBreakdown } from "../intervals";
+import { additiveIntervalWeights, forecastRelativeSd, forecastVariance, simulationBreakdown } from "../intervals";
 import { simulateFuture } from "../simulate";
 import type { FittedModel } from "../types";
 
@@ -27,7 +27,8 @@ export const LEAD_TIME_PATHS = 20000;
 
 /**
  * Forecast of the total over the next `periods` periods and the standard deviation of its error,
- * from the same error model as the prediction intervals.
+ * from the same error model as the prediction intervals, with the same widening for the
+ * estimated constants (sigma^2 below is the intervals' forecastVariance).
  *
  * Additive or no seasonality (Hyndman, Koehler, Ord & Snyder 2008, Forecasting with Exponential
  * Smoothing, ch. 6, the class 1 variance, applied to the sum as their aggregated, lead-time
@@ -56,7 +57,7 @@ export function leadTimeDemand(model: FittedModel, periods: number): LeadTimeDem
   }
   const forecast = forecastModel(model, periods).reduce((s, v) => s + v, 0);
   if (model.shape.multiplicative) {
-    const sigma = oneStepRelativeSd(model);
+    const sigma = forecastRelativeSd(model);
     const sums = new Float64Array(LEAD_TIME_PATHS);
     simulateFuture(model, sigma, periods, LEAD_TIME_PATHS, (_, step) => {
       for (let i = 0; i < step.length; i++) sums[i] += step[i];
@@ -65,7 +66,7 @@ export function leadTimeDemand(model: FittedModel, periods: number): LeadTimeDem
     const variance = sampleVariance(sums);
     return { periods, forecast, variance, sd: Math.sqrt(variance), method: "simulated", rootPeriodsSd: sigma * (forecast / periods) * Math.sqrt(periods) };
   }
-  const sigma2 = oneStepVariance(model);
+  const sigma2 = forecastVariance(model);
   const { weight } = additiveIntervalWeights(model, periods);
   // weight[j] = c_j for j = 1..periods-1; cumulative[m] = C_m.
   const cumulative = new Float64Array(periods);

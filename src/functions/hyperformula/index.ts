@@ -4,13 +4,16 @@
  */
 import { HyperFormula, type ConfigParams, type Sheets } from "hyperformula";
 import { EbbFunctionPlugin, translations } from "./plugin";
+import { registerStudentQuantile } from "./studentQuantile";
 
 export { EbbFunctionPlugin, functionId } from "./plugin";
+export { registerStudentQuantile } from "./studentQuantile";
 
 let registered = false;
 
-/** Registers the EBB functions with the formula engine (once per page or process). */
+/** Registers the EBB functions, and the full-precision T.INV the ledger needs, with the formula engine (once per page or process). */
 export function registerEbbFunctions(): void {
+  registerStudentQuantile();
   if (registered) return;
   HyperFormula.registerFunctionPlugin(EbbFunctionPlugin, translations(HyperFormula.getRegisteredLanguagesCodes()));
   registered = true;

@@ -196,9 +196,9 @@ export const OUTLOOK_BASIS = {
   rows: { label: "Update rows", note: "Rows in the update table, start rows included: finds the last row, so the outlook follows when rows are added." },
   variance: {
     label: "Error variance",
-    note: "Sum of squared errors / (number of errors - quantities the model estimates: the smoothing constants, the start level and trend, and all start indices but one). Hyndman & Khandakar (2008).",
+    note: "Sum of squared errors / (number of errors - quantities the model estimates: the smoothing constants, the start level and trend, and all start indices but one), Hyndman & Khandakar (2008); times (1 + quantities / errors), as those quantities are estimated (Akaike's final prediction error, 1970).",
   },
-  z: { label: "z for coverage", note: "Standard normal quantile at 0.5 + coverage / 2." },
+  z: { label: "t for coverage", note: "Student t quantile at 0.5 + coverage / 2, on (number of errors - quantities the model estimates) degrees of freedom: the variance is estimated. Near the normal z for a long history." },
 } as const;
 
 export const OUTLOOK_COLUMNS = {
@@ -218,7 +218,7 @@ export const OUTLOOK_COLUMNS = {
     note: "For step h > 1, with j = h - 1: alpha + alpha x beta x (trend multiplier at step j) + gamma x (1 - alpha) when j is a whole number of seasons. 0 at step 1.",
   },
   sumSquares: { label: "Sum of squared weights", note: "Sum of the squared spread weights down to this step." },
-  half: { label: "Half width", note: "z for coverage x square root of (error variance x (1 + sum of squared weights)). Hyndman, Koehler, Ord & Snyder (2008), ch. 6." },
+  half: { label: "Half width", note: "t for coverage x square root of (error variance x (1 + sum of squared weights)). Hyndman, Koehler, Ord & Snyder (2008), ch. 6." },
   gapBelow: {
     label: "Gap below",
     note: `Forecast minus the low end of the engine's seeded simulation of 2000 futures (multiplicative seasonality has no exact formula). A number, not a formula: "${ACTIONS.refreshInterval}" and "${ACTIONS.fit}" refresh it; "${ACTIONS.verify}" notes when it is due.`,

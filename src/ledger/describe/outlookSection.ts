@@ -5,7 +5,7 @@ import { updateRowCount, type OutlookColumnKey } from "./layout";
 import { FORMAT } from "./sheet";
 import { RELATIVE_TOLERANCE } from "./tolerance";
 import type { OutlookRowCells } from "./types";
-import { additiveIntervalWeights, coverageZ, estimatedQuantities, parseCoverage, trendMultipliers, varianceDivisor } from "../../engine";
+import { additiveIntervalWeights, estimatedQuantities, forecastVariance, intervalQuantile, parseCoverage, trendMultipliers } from "../../engine";
 
 /**
  * Section 4: the next `horizon` periods from the last row of the update table, found with
@@ -35,15 +35,17 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
     ["level", `=INDEX(${nm(ctx, "levels")},${rowsCell})`, model.final.level, FORMAT.units],
     ["trend", `=INDEX(${nm(ctx, "trends")},${rowsCell})`, model.final.trend, FORMAT.trend],
   );
-  const sigma2 = model.sse / varianceDivisor(model);
+  const sigma2 = forecastVariance(model);
   if (!mult) {
-    // z from the coverage setting, as the cell's NORM.S.INV computes it (never recovered from the interval).
-    const z = coverageZ(parseCoverage(ctx.coverage));
+    // The quantile from the coverage setting, as the cell's T.INV computes it (never recovered from the interval).
+    const z = intervalQuantile(model, parseCoverage(ctx.coverage));
     const lost = estimatedQuantities(model.shape);
-    basis.push(["variance", `=SUMSQ(${nm(ctx, "errors")})/MAX(1,COUNT(${nm(ctx, "errors")})-${lost})`, sigma2, FORMAT.units]);
+    const errors = nm(ctx, "errors");
+    // The engine's forecastVariance: SSE / (n - k), widened by 1 + k/n for the estimated quantities.
+    basis.push(["variance", `=SUMSQ(${errors})/MAX(1,COUNT(${errors})-${lost})*(1+${lost}/MAX(1,COUNT(${errors})))`, sigma2, FORMAT.units]);
     // Coverage typed as 95 or as 0.95 is the same interval (the engine's parseCoverage rule).
     const coverage = nm(ctx, "coverage");
-    basis.push(["z", `=NORM.S.INV(0.5+IF(${coverage}>1,${coverage}/100,${coverage})/2)`, z, FORMAT.constant]);
+    basis.push(["z", `=T.INV(0.5+IF(${coverage}>1,${coverage}/100,${coverage})/2,MAX(1,COUNT(${errors})-${lost}))`, z, FORMAT.constant]);
   }
   basis.forEach(([key, formula, value, format], i) => {
     cells.text(o.basisLabelRow, c0 + i, OUTLOOK_BASIS[key].label, "header", OUTLOOK_BASIS[key].note);

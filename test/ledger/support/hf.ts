@@ -1,10 +1,12 @@
 import { HyperFormula } from "hyperformula";
+import { registerStudentQuantile } from "../../../src/functions/hyperformula";
 import { describeLedger, hyperFormulaReader, writeLedgerToHyperFormula, type LedgerDescription, type LedgerInput } from "../../../src/ledger";
 import { parseCell } from "../../../src/ledger/describe/addresses";
 
 /** A ledger written into a fresh HyperFormula workbook with its default settings (as the preview uses). */
 export function ledgerInHyperFormula(input: LedgerInput): { hf: HyperFormula; desc: LedgerDescription; sheetId: number; value: (address: string) => unknown } {
   const desc = describeLedger(input);
+  registerStudentQuantile(); // as the preview does: T.INV to full precision
   const hf = HyperFormula.buildEmpty({ licenseKey: "gpl-v3" });
   const sheetId = writeLedgerToHyperFormula(hf, desc);
   const value = (address: string) => {

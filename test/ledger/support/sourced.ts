@@ -1,4 +1,5 @@
 import { HyperFormula } from "hyperformula";
+import { registerStudentQuantile } from "../../../src/functions/hyperformula";
 import { describeLedger, writeLedgerToHyperFormula, type LedgerDescription, type LedgerInput } from "../../../src/ledger";
 
 export const HISTORY_SHEET = "History";
@@ -9,6 +10,7 @@ export const HISTORY_SHEET = "History";
  * corrections, they go in column C and their reasons in D, and the ledger refers to those too.
  */
 export function sourcedLedger(input: Omit<LedgerInput, "source">): { hf: HyperFormula; desc: LedgerDescription; historySheet: number; ledgerSheet: number; input: LedgerInput } {
+  registerStudentQuantile(); // as the preview does: T.INV to full precision
   const hf = HyperFormula.buildEmpty({ licenseKey: "gpl-v3" });
   hf.addSheet(HISTORY_SHEET);
   const historySheet = hf.getSheetId(HISTORY_SHEET)!;
