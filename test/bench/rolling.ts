@@ -12,6 +12,7 @@
  */
 import { fitModel, forecastModel, maseScale, predictionInterval, smape, type AutoDesign } from "../../src/engine";
 import { loadM3, type M3Series } from "./m3";
+import { rollingOrigins, sample } from "./rollingOrigins";
 
 interface Design {
   name: string;
@@ -30,23 +31,6 @@ function arg(name: string, fallback: number): number {
   return i >= 0 ? Number(process.argv[i + 1]) : fallback;
 }
 
-/** Deterministic sample (mulberry32 shuffle with a fixed seed). */
-function sample<T>(all: T[], count: number, seed: number): T[] {
-  let a = seed >>> 0;
-  const next = () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = Math.imul(a ^ (a >>> 15), a | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-  const copy = all.slice();
-  for (let i = copy.length - 1; i > 0; i--) {
-    const j = Math.floor(next() * (i + 1));
-    [copy[i], copy[j]] = [copy[j], copy[i]];
-  }
-  return copy.slice(0, Math.min(count, copy.length));
-}
-
 interface Tally {
   smape: number;
   mase: number;
@@ -62,9 +46,7 @@ function evaluate(series: M3Series[], d: Design): Tally {
   const t: Tally = { smape: 0, mase: 0, n: 0, nMase: 0, in80: 0, in95: 0, steps: 0, ms: 0 };
   for (const s of series) {
     const h = s.horizon;
-    for (const back of [h, h + Math.ceil(h / 2), h + 2 * Math.ceil(h / 2)]) {
-      const origin = s.train.length - back;
-      if (origin < 3 * s.period) continue;
+    for (const origin of rollingOrigins(s)) {
       const train = s.train.subarray(0, origin);
       const actual = s.train.subarray(origin, origin + h);
       const t0 = performance.now();
