@@ -31,7 +31,7 @@ export interface BenchSection {
 }
 
 export const SECTIONS: BenchSection[] = [
-  { name: "order", run: (c) => renderOrder(runOrderBench(c.monthly, c.quick, c.progress)) },
+  { name: "order", run: (c) => renderOrder(runOrderBench(c.monthly, c.quarterly, c.quick, c.progress)) },
   { name: "signals", run: (c) => renderSignals(runSignalBench(c.quick ? c.monthly : c.allMonthly, c.allQuarterly, c.quick, c.progress)) },
   { name: "ledger", run: async (c) => renderLedgerBench(await runLedgerBench(c.quick, c.progress)) },
   { name: "batch", last: true, run: async (c) => renderBatchSection(await batchBenchmark(c.quick, c.progress)) },
