@@ -1,8 +1,9 @@
 /**
  * Renders one ledger to PNG for review (not a test): writes the .xlsx, lets LibreOffice
  * recompute and print it to PDF, then pdftoppm turns the first pages into images:
- *   npx tsx test/ledger/render-ledger-png.ts ["Rain barrels"]
- * (a demo product's name, Seed trays by default). Output: test-artifacts/ledger.png (settings,
+ *   npx tsx test/ledger/render-ledger-png.ts ["Rain barrels"] [additive]
+ * (a demo product's name, Seed trays by default; the seasonality, multiplicative by default:
+ * additive shows the interval's formulas, the variance and T.INV cells). Output: test-artifacts/ledger.png (settings,
  * scorecard, outlook, start), test-artifacts/ledger-updates.png (the first update rows) and
  * test-artifacts/ledger-last.png (the last page: the latest rows and their tracking-signal
  * shading as LibreOffice draws the conditional format). Needs soffice and pdftoppm (poppler-utils).
@@ -25,7 +26,7 @@ async function main(): Promise<void> {
   const desc = describeLedger({
     history: demoSeries(product),
     name: `${product}, Larkmere Garden Supply (invented data)`,
-    settings: { period: 12, seasonality: "multiplicative", trend: "damped" },
+    settings: { period: 12, seasonality: process.argv[3] === "additive" ? "additive" : "multiplicative", trend: "damped" },
     horizon: 12,
     coverage: 0.9,
     anchor: { sheet: "Seed trays", cell: "A1" },
