@@ -27,3 +27,17 @@ test("a steady outlook carries no caution", () => {
   expect(outlookOf(d).every((v) => v > 0)).toBe(true);
   expect(d.cautions).toEqual([]);
 });
+
+test("an interval on no more errors than estimated quantities is cautioned; its t cell is qt(0.975, 1)", () => {
+  // 36 months with additive seasonality and a linear trend: the first two seasons start
+  // the model, leaving 12 one-step errors for 2 + 2 + 12 = 16 estimated quantities.
+  const short = describeLedger({ history: demoSeries("Seed trays").slice(0, 36), name: "Seed trays", settings: { period: 12, seasonality: "additive", trend: "linear" }, horizon: 12, coverage: 0.95, anchor });
+  expect(short.cautions.filter((c) => c.includes("interval rests on 12 one-step errors for the 16 quantities"))).toHaveLength(1);
+  expect(short.cautions.join(" ")).toContain("Add history, or choose a simpler model");
+  // The quantile the ledger writes: Student t on max(1, 12 - 16) = 1 degree; base R 4.2: qt(0.975, 1) = 12.7062047361747.
+  const tCell = short.cells.find((c) => typeof c.formula === "string" && c.formula.startsWith("=T.INV("))!;
+  expect(tCell.value as number).toBeCloseTo(12.7062047361747, 10);
+  // Two more years: 36 errors for 16 quantities, no caution.
+  const longer = describeLedger({ history: demoSeries("Seed trays").slice(0, 60), name: "Seed trays", settings: { period: 12, seasonality: "additive", trend: "linear" }, horizon: 12, coverage: 0.95, anchor });
+  expect(longer.cautions).toEqual([]);
+});

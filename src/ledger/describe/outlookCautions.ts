@@ -1,11 +1,31 @@
+import { estimatedQuantities } from "../../engine";
 import type { EngineFigures } from "./engineFigures";
 
 /**
  * Plain cautions about a ledger's outlook that a planner should read before it feeds orders:
  * an outlook that falls below zero on a history of positive figures (usually a trend fitted on
- * little history, its constants at their bounds). The ledger itself is written as asked.
+ * little history, its constants at their bounds), and an interval whose variance rests on no
+ * more one-step errors than the model estimates quantities. The ledger itself is written as asked.
  */
 export function outlookCautions(f: EngineFigures): string[] {
+  return [...belowZeroCaution(f), ...fewErrorsCaution(f)];
+}
+
+/**
+ * With n errors and k estimated quantities the variance is taken over max(1, n - k) and the
+ * quantile on as many degrees of freedom, so when n <= k both rest on a single degree: the
+ * interval is many times wider than the errors suggest (t is 12.7 at 95%).
+ */
+function fewErrorsCaution(f: EngineFigures): string[] {
+  const k = estimatedQuantities(f.model.shape);
+  const n = f.model.errorCount;
+  if (n > k) return [];
+  return [
+    `Caution: the interval rests on ${n} one-step errors for the ${k} quantities this model estimates (constants, start level${f.model.shape.hasTrend ? ", trend" : ""}${f.model.shape.seasonal ? " and seasonal indices" : ""}), so its variance is barely estimated and the interval is very wide. Add history, or choose a simpler model (trend none, or seasonality none), before the interval feeds orders or stock.`,
+  ];
+}
+
+function belowZeroCaution(f: EngineFigures): string[] {
   let positive = true;
   for (const v of f.y) if (v === v && !(v > 0)) positive = false;
   if (!positive) return [];
