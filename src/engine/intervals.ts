@@ -135,6 +135,15 @@ export function errorQuantile(model: FittedModel, probability: number): number {
 }
 
 /**
+ * True when the model has no more one-step errors than it estimates quantities: the variance is
+ * then taken over 1 and the quantile on 1 degree of freedom (varianceDivisor's floor), so the
+ * interval is many times wider than the errors suggest (t = 12.7 at 95%). Panels caution on it.
+ */
+export function varianceIsThin(model: FittedModel): boolean {
+  return model.errorCount <= estimatedQuantities(model.shape);
+}
+
+/**
  * Divisor of the error variance: the number of one-step errors less the quantities the model
  * estimates (as the forecast package for R does for its state-space models, Hyndman &
  * Khandakar 2008, J. Stat. Software 27(3)), so that short histories with many parameters do

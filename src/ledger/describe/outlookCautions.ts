@@ -1,4 +1,4 @@
-import { estimatedQuantities } from "../../engine";
+import { estimatedQuantities, varianceIsThin } from "../../engine";
 import type { EngineFigures } from "./engineFigures";
 
 /**
@@ -11,15 +11,11 @@ export function outlookCautions(f: EngineFigures): string[] {
   return [...belowZeroCaution(f), ...fewErrorsCaution(f)];
 }
 
-/**
- * With n errors and k estimated quantities the variance is taken over max(1, n - k) and the
- * quantile on as many degrees of freedom, so when n <= k both rest on a single degree: the
- * interval is many times wider than the errors suggest (t is 12.7 at 95%).
- */
+/** The engine's varianceIsThin: no more one-step errors than estimated quantities. */
 function fewErrorsCaution(f: EngineFigures): string[] {
+  if (!varianceIsThin(f.model)) return [];
   const k = estimatedQuantities(f.model.shape);
   const n = f.model.errorCount;
-  if (n > k) return [];
   return [
     `Caution: the interval rests on ${n} one-step errors for the ${k} quantities this model estimates (constants, start level${f.model.shape.hasTrend ? ", trend" : ""}${f.model.shape.seasonal ? " and seasonal indices" : ""}), so its variance is barely estimated and the interval is very wide. Add history, or choose a simpler model (trend none, or seasonality none), before the interval feeds orders or stock.`,
   ];
