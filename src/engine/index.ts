@@ -1,6 +1,6 @@
 /** Ebb's forecasting engine: the only place with mathematics. Everything else calls this. */
 export * from "./types";
-export { modelShape, isSeasonal, shapeConstants, parameterCount, estimatedQuantities, requiredLength, seasonPosition, type ModelShape } from "./shape";
+export { modelShape, isSeasonal, shapeConstants, parameterCount, estimatedQuantities, estimatedQuantityWords, requiredLength, seasonPosition, type ModelShape } from "./shape";
 export * from "./errors";
 export * from "./options";
 export { cleanHistory, countPresent, allPositive, requirePositive } from "./series";

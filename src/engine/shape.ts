@@ -99,6 +99,15 @@ export function estimatedQuantities(shape: ModelShape): number {
   return 2 + (shape.hasTrend ? 2 : 0) + (shape.damped ? 1 : 0) + (shape.seasonal ? shape.period : 0);
 }
 
+/** The quantities estimatedQuantities counts, in words, for a ledger's note: "alpha, the start level, ...". */
+export function estimatedQuantityWords(shape: ModelShape): string {
+  const words = ["alpha", "the start level"];
+  if (shape.hasTrend) words.push("beta", "the start trend");
+  if (shape.damped) words.push("phi");
+  if (shape.seasonal) words.push("gamma", `${shape.period - 1} start indices (the last follows from the others)`);
+  return `${words.slice(0, -1).join(", ")} and ${words[words.length - 1]}`;
+}
+
 /** History needed before a model of this shape can be used, with `free` constants to fit. */
 export function requiredLength(shape: ModelShape, free: number): number {
   if (shape.start === "classic") return shape.seasonal ? 2 * shape.period + 1 : 3;

@@ -196,9 +196,10 @@ export const OUTLOOK_BASIS = {
   rows: { label: "Update rows", note: "Rows in the update table, start rows included: finds the last row, so the outlook follows when rows are added." },
   variance: {
     label: "Error variance",
-    note: "Sum of squared errors / (number of errors - quantities the model estimates: the smoothing constants, the start level and trend, and all start indices but one), Hyndman & Khandakar (2008); times (1 + quantities / errors), as those quantities are estimated (Akaike's final prediction error, 1970).",
+    note: "Sum of squared errors / (number of errors - quantities estimated), Hyndman & Khandakar (2008); times (1 + quantities estimated / number of errors), as those quantities are estimated from the same history (Akaike's final prediction error, 1970).",
   },
-  z: { label: "t for coverage", note: "Student t quantile at 0.5 + coverage / 2, on (number of errors - quantities the model estimates) degrees of freedom: the variance is estimated. Near the normal z for a long history." },
+  z: { label: "t for coverage", note: "Student t quantile at 0.5 + coverage / 2, on (number of errors - quantities estimated) degrees of freedom: the variance is estimated. Near the normal z for a long history." },
+  quantities: { label: "Quantities estimated", note: "What this model estimates from the history: " },
 } as const;
 
 export const OUTLOOK_COLUMNS = {

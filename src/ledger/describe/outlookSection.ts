@@ -5,7 +5,7 @@ import { updateRowCount, type OutlookColumnKey } from "./layout";
 import { FORMAT } from "./sheet";
 import { RELATIVE_TOLERANCE } from "./tolerance";
 import type { OutlookRowCells } from "./types";
-import { additiveIntervalWeights, estimatedQuantities, forecastVariance, intervalQuantile, parseCoverage, trendMultipliers } from "../../engine";
+import { additiveIntervalWeights, estimatedQuantities, estimatedQuantityWords, forecastVariance, intervalQuantile, parseCoverage, trendMultipliers } from "../../engine";
 
 /**
  * Section 4: the next `horizon` periods from the last row of the update table, found with
@@ -39,7 +39,8 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
   if (!mult) {
     // The quantile from the coverage setting, as the cell's T.INV computes it (never recovered from the interval).
     const z = intervalQuantile(model, parseCoverage(ctx.coverage));
-    const lost = estimatedQuantities(model.shape);
+    // The count of estimated quantities sits in its own labelled cell after z (c0 + 6), read by both formulas.
+    const lost = abs(o.basisValueRow, c0 + 6);
     const errors = nm(ctx, "errors");
     // The engine's forecastVariance: SSE / (n - k), widened by 1 + k/n for the estimated quantities.
     basis.push(["variance", `=SUMSQ(${errors})/MAX(1,COUNT(${errors})-${lost})*(1+${lost}/MAX(1,COUNT(${errors})))`, sigma2, FORMAT.units]);
@@ -53,6 +54,11 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
     // A variance is in squared units: errors off by delta move it by about 2 sigma delta.
     if (key === "variance") cell.tolerance = 2 * Math.sqrt(sigma2) * RELATIVE_TOLERANCE * f.scale + (RELATIVE_TOLERANCE * f.scale) ** 2;
   });
+  if (!mult) {
+    const q = OUTLOOK_BASIS.quantities;
+    cells.text(o.basisLabelRow, c0 + 6, q.label, "header", `${q.note}${estimatedQuantityWords(model.shape)}.`);
+    cells.put(o.basisValueRow, c0 + 6, "constant", "label", estimatedQuantities(model.shape), { format: FORMAT.count });
+  }
   const lastPeriod = abs(o.basisValueRow, c0);
   const level = abs(o.basisValueRow, c0 + 1);
   const trend = abs(o.basisValueRow, c0 + 2);
