@@ -28,7 +28,7 @@ export function horizonArg(v: unknown): number {
 
 /** Interval coverage, a fraction such as 0.95 (the default) or a percentage such as 95. */
 export function coverageArg(v: unknown): number {
-  return parseCoverage(optionalNumberArg(v, "coverage") ?? 0.95);
+  return parseCoverage(optionalNumberArg(v, "coverage", "Type a fraction such as 0.95 or a percent such as 95, or leave it blank for 95%.") ?? 0.95);
 }
 
 export function seasonalityArg(v: unknown): SeasonalityChoice {

@@ -128,8 +128,10 @@ function inputError(code: string, where: string): EbbError {
   return new EbbError(na ? "na" : "value", "error-in-input", message);
 }
 
+/** An argument's name as a message begins it: "service_level" reads "Service level". */
 function capital(s: string): string {
-  return s.charAt(0).toUpperCase() + s.slice(1);
+  const words = s.replace(/_/g, " ");
+  return words.charAt(0).toUpperCase() + words.slice(1);
 }
 
 /** One cell of a numeric range: a finite number, or null for a blank. */
@@ -166,8 +168,9 @@ function scalar(v: unknown, name: string): unknown {
   throw badInput("range-for-scalar", `${capital(name)} must be a single value, not a range of ${range.length} x ${range[0].length} cells.`);
 }
 
-/** An optional number: blank or omitted gives undefined. */
-export function optionalNumberArg(v: unknown, name: string): number | undefined {
+/** An optional number: blank or omitted gives undefined. `advice` (what to type) ends a message about a wrong type. */
+export function optionalNumberArg(v: unknown, name: string, advice?: string): number | undefined {
+  const then = advice ? ` ${advice}` : "";
   const s = scalar(v, name);
   if (isBlank(s)) return undefined;
   if (typeof s === "number") {
@@ -176,9 +179,9 @@ export function optionalNumberArg(v: unknown, name: string): number | undefined 
   }
   if (typeof s === "string") {
     if (looksNumeric(s)) throw badInput("number-as-text", `${capital(name)} is text ${quote(s)}, a number stored as text. Type it as a number.`);
-    throw badInput("text-for-number", `${capital(name)} must be a number; got the text ${quote(s)}.`);
+    throw badInput("text-for-number", `${capital(name)} must be a number; got the text ${quote(s)}.${then}`);
   }
-  if (typeof s === "boolean") throw badInput("boolean-for-number", `${capital(name)} must be a number; got ${s ? "TRUE" : "FALSE"}.`);
+  if (typeof s === "boolean") throw badInput("boolean-for-number", `${capital(name)} must be a number; got ${s ? "TRUE" : "FALSE"}.${then}`);
   const code = errorCode(s);
   if (code !== undefined) throw inputError(code, name);
   throw badInput("not-a-number", `${capital(name)} must be a number.`);
@@ -186,7 +189,7 @@ export function optionalNumberArg(v: unknown, name: string): number | undefined 
 
 /** A number the function cannot do without. */
 export function requiredNumberArg(v: unknown, name: string, advice: string): number {
-  const n = optionalNumberArg(v, name);
+  const n = optionalNumberArg(v, name, advice);
   if (n === undefined) throw badInput("missing-argument", `${capital(name)} is missing. ${advice}`);
   return n;
 }

@@ -113,6 +113,18 @@ const cases: Case[] = [
     message: /^beta must be a number from 0 to 1; got -0\.2/,
   },
   {
+    what: "a coverage typed as text",
+    formula: '=EBB.BAND(A1:A36, 12, 6, "abc")',
+    type: "VALUE",
+    message: /^Coverage must be a number; got the text "abc"\. Type a fraction such as 0\.95 or a percent such as 95, or leave it blank for 95%\.$/,
+  },
+  {
+    what: "a service level typed as text (the argument named in words)",
+    formula: '=EBB.BUFFER(A1:A36, 12, 3, "high")',
+    type: "VALUE",
+    message: /^Service level must be a number; got the text "high"\. Type the cycle service level, for example 0\.95\.$/,
+  },
+  {
     what: "not enough history yet",
     formula: "=EBB.AHEAD(A1:A36, 12, 6)",
     history: seed.slice(0, 15),
