@@ -50,7 +50,7 @@ export function checkPeriod(v: number | undefined): number {
 }
 
 /** The two ways coverage is written, for messages: say which form a field expects. */
-export const COVERAGE_FORMS = "a fraction between 0 and 1 (such as 0.95) or a percentage between 1 and 100 (such as 95)";
+export const COVERAGE_FORMS = "a fraction above 0 and below 1 (such as 0.95) or a percentage above 1 and below 100 (such as 95)";
 
 /** The two open ranges coverage may be typed in: a fraction, or a percentage. */
 export const COVERAGE_RANGES = { fraction: { low: 0, high: 1 }, percent: { low: 1, high: 100 } } as const;

@@ -38,7 +38,7 @@ describe("toRunSettings", () => {
       [{ period: "2.5" }, /--period/],
       [{ cycles: "1" }, /--cycles/],
       [{ horizon: "0" }, /--horizon/],
-      [{ coverage: "100" }, /--coverage: Coverage must be a fraction between 0 and 1 \(such as 0.95\) or a percentage between 1 and 100 \(such as 95\)/],
+      [{ coverage: "100" }, /--coverage: Coverage must be a fraction above 0 and below 1 \(such as 0.95\) or a percentage above 1 and below 100 \(such as 95\)/],
       [{ coverage: "1" }, /--coverage/],
       [{ workers: "0" }, /--workers/],
       [{ delimiter: "x" }, /--delimiter/],

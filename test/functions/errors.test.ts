@@ -171,7 +171,7 @@ const cases: Case[] = [
     what: "coverage of 100 percent (an unbounded interval)",
     formula: "=EBB.BAND(A1:A36, 12, 6, 100)",
     type: "VALUE",
-    message: /^Coverage must be a fraction between 0 and 1 \(such as 0\.95\) or a percentage between 1 and 100 \(such as 95\); got 100\.$/,
+    message: /^Coverage must be a fraction above 0 and below 1 \(such as 0\.95\) or a percentage above 1 and below 100 \(such as 95\); got 100\.$/,
   },
   {
     what: '"auto" where one given state is updated',

@@ -33,6 +33,6 @@ describe("the ledger's coverage cell", () => {
     const { row, col } = parseCell(desc.layout.settings.coverage);
     hf.setCellContents({ sheet: sheetId, row, col }, [[100]]);
     const report = verifyLedger(hyperFormulaReader(hf, anchor.sheet), anchor);
-    expect(report.problems.find((p) => p.kind === "setting-invalid")?.message).toMatch(/a fraction between 0 and 1 \(such as 0\.95\) or a percentage between 1 and 100/);
+    expect(report.problems.find((p) => p.kind === "setting-invalid")?.message).toMatch(/a fraction above 0 and below 1 \(such as 0\.95\) or a percentage above 1 and below 100/);
   });
 });

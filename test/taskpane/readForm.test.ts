@@ -19,8 +19,8 @@ const form = (coveragePercent: string): FormValues => ({
 });
 
 describe("readForm coverage", () => {
-  it("reads 95 and 0.95 as the same 95% interval", () => {
-    for (const typed of ["95", "0.95", " 95 "]) {
+  it("reads 95, 0.95 and 95% as the same 95% interval", () => {
+    for (const typed of ["95", "0.95", " 95 ", "95%", "95 %"]) {
       const r = readForm(form(typed));
       expect(r.ok && r.value.coverage).toBe(0.95);
     }
@@ -32,7 +32,7 @@ describe("readForm coverage", () => {
       expect(r.ok).toBe(false);
       if (!r.ok) {
         expect(r.field).toBe("coveragePercent");
-        expect(r.message).toBe("Interval coverage: type a fraction between 0 and 1 (such as 0.95) or a percentage between 1 and 100 (such as 95).");
+        expect(r.message).toBe("Interval coverage: type a fraction above 0 and below 1 (such as 0.95) or a percentage above 1 and below 100 (such as 95).");
       }
     }
   });

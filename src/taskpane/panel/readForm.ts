@@ -60,7 +60,8 @@ export function readForm(v: FormValues): FormResult {
   let coverage: number;
   try {
     if (v.coveragePercent.trim() === "") throw new Error("blank");
-    coverage = parseCoverage(Number(v.coveragePercent.trim()));
+    // "90%" is read as 90, as a spreadsheet cell reads it.
+    coverage = parseCoverage(Number(v.coveragePercent.trim().replace(/\s*%$/, "")));
   } catch {
     return { ok: false, field: "coveragePercent", message: `Interval coverage: type ${COVERAGE_FORMS}.` };
   }
