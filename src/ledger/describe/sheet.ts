@@ -51,6 +51,7 @@ export const FORMAT = {
   constant: "0.0000",
   percent: "0.00",
   signal: "0.00",
-  coverage: "0.0%",
+  // A fraction (0.95) shows as 95.0%, a percent typed as 95 as 95.0% too (parseCoverage reads both).
+  coverage: '[<=1]0.0%;0.0"%"',
   count: "0",
 } as const;

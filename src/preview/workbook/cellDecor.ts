@@ -67,11 +67,25 @@ export class DecorStore {
   }
 }
 
-/** A number shown with a spreadsheet number format code (the handful the ledger uses). */
+/**
+ * A number shown with a spreadsheet number format code (the handful the ledger uses): 0, 0.00,
+ * #,##0.00, a percent (0.0%), a quoted literal after the digits (0.0"%"), and two sections with a
+ * condition on the first ([<=1]0.0%;0.0"%": the first section when the condition holds).
+ */
 export function formatNumber(v: number, format: string | undefined): string {
   if (!format || format === "General") return numberText(v);
-  const percent = format.endsWith("%");
-  const body = percent ? format.slice(0, -1) : format;
+  const conditional = /^\[(<=|>=|<|>|=)(-?\d+(?:\.\d+)?)\]([^;]+);(.+)$/.exec(format);
+  if (conditional) {
+    const [, op, bound, first, second] = conditional;
+    const b = Number(bound);
+    const holds = op === "<=" ? v <= b : op === ">=" ? v >= b : op === "<" ? v < b : op === ">" ? v > b : v === b;
+    return formatNumber(v, holds ? first : second);
+  }
+  const literal = /^(.*?)"([^"]*)"$/.exec(format);
+  const suffix = literal ? literal[2] : "";
+  const code = literal ? literal[1] : format;
+  const percent = code.endsWith("%");
+  const body = percent ? code.slice(0, -1) : code;
   const m = /^(#,##)?0(?:\.(0+))?$/.exec(body);
   if (!m) return numberText(v);
   const decimals = m[2]?.length ?? 0;
@@ -79,5 +93,5 @@ export function formatNumber(v: number, format: string | undefined): string {
   const text = m[1]
     ? x.toLocaleString("en-US", { minimumFractionDigits: decimals, maximumFractionDigits: decimals })
     : x.toFixed(decimals);
-  return percent ? `${text}%` : text;
+  return `${text}${percent ? "%" : ""}${suffix}`;
 }
