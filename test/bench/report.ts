@@ -228,8 +228,9 @@ function coverageSection(r: BenchResult): string {
     "## Prediction-interval coverage",
     "",
     "Share of holdout actuals inside the interval (targets: 77-83% for 80%, 93-97% for 95%). Ebb: analytic variance",
-    "(additive) or seeded simulation (multiplicative) of the chosen auto model. Base R's `predict.HoltWinters` intervals",
-    "are shown for orientation; statsmodels' ExponentialSmoothing gives none.",
+    "(additive) or seeded simulation (multiplicative) of the chosen auto model, widened for the estimated quantities (t on",
+    "n - k degrees, variance times 1 + k/n). Base R's `predict.HoltWinters` intervals are shown for orientation;",
+    "statsmodels' ExponentialSmoothing gives none.",
     "",
     markdownTable(["method", "data", "80% interval", "95% interval"], rows),
   ];
