@@ -27,6 +27,17 @@ describe("the ledger's coverage cell", () => {
     expect(report.problems.filter((p) => p.kind === "setting-invalid")).toEqual([]);
   });
 
+  it.each([0, null, 1, 100, "high"])("a coverage of %p gives #N/A interval ends, not a zero-width interval", (typed) => {
+    const anchor = { sheet: "Cover", cell: "A1" };
+    const { hf, desc, sheetId, value } = ledgerInHyperFormula({ history, settings, horizon: 4, coverage: 0.95, anchor });
+    const { row, col } = parseCell(desc.layout.settings.coverage);
+    hf.setCellContents({ sheet: sheetId, row, col }, [[typed]]);
+    desc.layout.outlook.rows.forEach((o) => {
+      for (const end of [value(o.low), value(o.high)]) expect(end).toMatchObject({ type: "NA" });
+      expect(typeof value(o.forecast)).toBe("number"); // the point forecast stays
+    });
+  });
+
   it("says which forms it expects for a coverage of 100", () => {
     const anchor = { sheet: "Cover", cell: "A1" };
     const { hf, desc, sheetId } = ledgerInHyperFormula({ history, settings, horizon: 4, coverage: 0.95, anchor });

@@ -10,7 +10,7 @@ import { demoSeries, ledgerCases, quarterlyMargin } from "./support/cases";
 import { ledgerInHyperFormula } from "./support/hf";
 
 /** Built-in functions the ledger may use: in both HyperFormula 3 and LibreOffice Calc (and Excel). */
-const ALLOWED = ["SUM", "AVERAGE", "ABS", "SQRT", "INDEX", "SLOPE", "IF", "ISNUMBER", "COUNT", "COUNTIF", "SUMSQ", "MOD", "T.INV", "ROWS", "MAX", "AND", "OR", "EXACT", "TRIM", "T", "PI"];
+const ALLOWED = ["SUM", "AVERAGE", "ABS", "SQRT", "INDEX", "SLOPE", "IF", "ISNUMBER", "COUNT", "COUNTIF", "SUMSQ", "MOD", "T.INV", "NA", "ROWS", "MAX", "AND", "OR", "EXACT", "TRIM", "T", "PI"];
 
 const input = (over: Partial<LedgerInput> = {}): LedgerInput => ({
   history: demoSeries("Seed trays"),

@@ -198,7 +198,7 @@ export const OUTLOOK_BASIS = {
     label: "Error variance",
     note: "Sum of squared errors / (number of errors - quantities estimated), Hyndman & Khandakar (2008); times (1 + quantities estimated / number of errors), as those quantities are estimated from the same history (Akaike's final prediction error, 1970).",
   },
-  z: { label: "t for coverage", note: "Student t quantile at 0.5 + coverage / 2, on (number of errors - quantities estimated) degrees of freedom: the variance is estimated. Near the normal z for a long history." },
+  z: { label: "t for coverage", note: "Student t quantile at 0.5 + coverage / 2, on (number of errors - quantities estimated) degrees of freedom: the variance is estimated. Near the normal z for a long history. #N/A while the coverage cell holds no valid coverage, so the interval ends show #N/A too." },
   quantities: { label: "Quantities estimated", note: "What this model estimates from the history: " },
 } as const;
 

@@ -46,7 +46,9 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
     basis.push(["variance", `=SUMSQ(${errors})/MAX(1,COUNT(${errors})-${lost})*(1+${lost}/MAX(1,COUNT(${errors})))`, sigma2, FORMAT.units]);
     // Coverage typed as 95 or as 0.95 is the same interval (the engine's parseCoverage rule).
     const coverage = nm(ctx, "coverage");
-    basis.push(["z", `=T.INV(0.5+IF(${coverage}>1,${coverage}/100,${coverage})/2,MAX(1,COUNT(${errors})-${lost}))`, z, FORMAT.constant]);
+    // A coverage the engine refuses (0, blank, 1, 100 or more, text) gives #N/A, so no interval shows as if it were one.
+    const valid = `AND(ISNUMBER(${coverage}),${coverage}>0,${coverage}<100,${coverage}<>1)`;
+    basis.push(["z", `=IF(${valid},T.INV(0.5+IF(${coverage}>1,${coverage}/100,${coverage})/2,MAX(1,COUNT(${errors})-${lost})),NA())`, z, FORMAT.constant]);
   }
   basis.forEach(([key, formula, value, format], i) => {
     cells.text(o.basisLabelRow, c0 + i, OUTLOOK_BASIS[key].label, "header", OUTLOOK_BASIS[key].note);
