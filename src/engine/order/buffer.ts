@@ -30,12 +30,14 @@ export interface StockBuffer extends LeadTimeDemand {
  * the chapters on individual items with probabilistic demand, cited from memory: safety stock =
  * k * sigma_L, reorder point s = forecast over L + k * sigma_L, with k the quantile of the cycle
  * service level: Student's t on the variance's degrees of freedom, as the intervals take it
- * (intervalQuantile), which is the standard normal quantile once the history is long; for periodic review the protection interval is R + L and the
- * figure is the order-up-to level). sigma_L comes from
- * `leadTimeDemand`, which sums the h-step variances and their covariances (Hyndman et al. 2008).
+ * (intervalQuantile), which is the standard normal quantile once the history is long; for
+ * periodic review the protection interval is R + L and the figure is the order-up-to level).
+ * sigma_L comes from `leadTimeDemand`, which sums the h-step variances and their covariances
+ * (Hyndman et al. 2008).
  *
- * Example (hand computation, common practice for k; the normal quantile, for a long history): forecast 100 a period, L = 3, sigma_L = 20.98
- * (see leadTimeDemand), 95% cycle service level: k = 1.6449, safety stock 34.50, reorder point 334.50.
+ * Example (hand computation, common practice for k; the normal quantile, for a long history):
+ * forecast 100 a period, L = 3, sigma_L = 20.98 (see leadTimeDemand), 95% cycle service level:
+ * k = 1.6449, safety stock 34.50, reorder point 334.50.
  */
 export function stockBuffer(model: FittedModel, settings: BufferSettings): StockBuffer {
   const leadTime = checkWholePeriods(settings.leadTime, "lead time", 1);

@@ -84,7 +84,7 @@ function writeCell(sheet: ExcelJS.Worksheet, cell: LedgerCell, cached: boolean):
 
 /** In the file format, functions newer than Excel 2007 carry the _xlfn. prefix. */
 export function fileFormula(formula: string): string {
-  return formula.replace(/^=/, "").replace(/\bNORM\.S\.INV\(/g, "_xlfn.NORM.S.INV(").replace(/\bT\.INV\(/g, "_xlfn.T.INV(");
+  return formula.replace(/^=/, "").replace(/\bT\.INV\(/g, "_xlfn.T.INV(");
 }
 
 function resultOf(v: CellValue): number | string {
