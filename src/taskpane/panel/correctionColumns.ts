@@ -2,7 +2,7 @@
  * The panel's optional corrections and reasons columns: typed as a column (C, or Corrections!C),
  * read on the same rows as the history, so row for row each correction sits beside its actual.
  */
-import { shownAddress } from "../../ledger/describe/addresses";
+import { sourceAddress } from "../../ledger/describe/sourceCells";
 import type { HistorySource, LedgerCorrections } from "../../ledger";
 import type { PortValue, WorkbookPort } from "../port";
 import type { HistoryPick } from "./historyPick";
@@ -50,7 +50,7 @@ export async function readCorrectionCells(port: WorkbookPort, source: HistorySou
     if (v === null || v === "") values.push(null);
     else if (typeof v === "number" && Number.isFinite(v)) values.push(v);
     else {
-      const address = shownAddress(source.sheet, source.firstRow + from + i, source.col);
+      const address = sourceAddress(source, from + i);
       const shown = typeof v === "object" ? v.error : JSON.stringify(v);
       return { ok: false, message: `The correction in ${address} is ${shown}, not a number. Type a figure there, or clear it to use the actual.` };
     }
