@@ -3,6 +3,7 @@
  * formulas, formats, names, notes, conditional formats, merges, chart), and nothing about
  * how a particular host writes it. Built by `describeLedger`, written by the adapters.
  */
+import type { CorrectionFigures } from "./correctedInput";
 
 /** Settings as the panel or the CLI gives them; constants left out are fitted by the engine. */
 export interface LedgerSettings {
@@ -298,7 +299,7 @@ export interface LedgerDescription {
   /** The history's cells the actuals refer to (undefined: typed actuals). */
   source?: HistorySource;
   /** The corrections as written (undefined: a ledger without correction columns). */
-  corrections?: import("./correctedInput").CorrectionFigures;
+  corrections?: CorrectionFigures;
   /** Cautions about the outlook a planner should read before it feeds orders (empty when none). */
   cautions: string[];
   /** The tracking signal as written: its latest value (null while not yet defined) and the update rows it flags. */
