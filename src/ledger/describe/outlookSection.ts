@@ -36,11 +36,12 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
     ["trend", `=INDEX(${nm(ctx, "trends")},${rowsCell})`, model.final.trend, FORMAT.trend],
   );
   const sigma2 = forecastVariance(model);
+  // The count of estimated quantities sits in its own labelled cell after z, read by both formulas.
+  const quantitiesCol = c0 + 6;
   if (!mult) {
     // The quantile from the coverage setting, as the cell's T.INV computes it (never recovered from the interval).
     const z = intervalQuantile(model, parseCoverage(ctx.coverage));
-    // The count of estimated quantities sits in its own labelled cell after z (c0 + 6), read by both formulas.
-    const lost = abs(o.basisValueRow, c0 + 6);
+    const lost = abs(o.basisValueRow, quantitiesCol);
     const errors = nm(ctx, "errors");
     // The engine's forecastVariance: SSE / (n - k), widened by 1 + k/n for the estimated quantities.
     basis.push(["variance", `=SUMSQ(${errors})/MAX(1,COUNT(${errors})-${lost})*(1+${lost}/MAX(1,COUNT(${errors})))`, sigma2, FORMAT.units]);
@@ -58,8 +59,8 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
   });
   if (!mult) {
     const q = OUTLOOK_BASIS.quantities;
-    cells.text(o.basisLabelRow, c0 + 6, q.label, "header", `${q.note}${estimatedQuantityWords(model.shape)}.`);
-    cells.put(o.basisValueRow, c0 + 6, "constant", "label", estimatedQuantities(model.shape), { format: FORMAT.count });
+    cells.text(o.basisLabelRow, quantitiesCol, q.label, "header", `${q.note}${estimatedQuantityWords(model.shape)}.`);
+    cells.put(o.basisValueRow, quantitiesCol, "constant", "label", estimatedQuantities(model.shape), { format: FORMAT.count });
   }
   const lastPeriod = abs(o.basisValueRow, c0);
   const level = abs(o.basisValueRow, c0 + 1);
