@@ -13,8 +13,8 @@ let registered = false;
 
 /** Registers the EBB functions, and the full-precision T.INV the ledger needs, with the formula engine (once per page or process). */
 export function registerEbbFunctions(): void {
-  registerStudentQuantile();
   if (registered) return;
+  registerStudentQuantile();
   HyperFormula.registerFunctionPlugin(EbbFunctionPlugin, translations(HyperFormula.getRegisteredLanguagesCodes()));
   registered = true;
 }
