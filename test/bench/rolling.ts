@@ -12,7 +12,7 @@
  */
 import { fitModel, forecastModel, maseScale, predictionInterval, smape, type AutoDesign } from "../../src/engine";
 import { loadM3, type M3Series } from "./m3";
-import { rollingOrigins, sample } from "./rollingOrigins";
+import { numberArg as arg, rollingOrigins, sample } from "./rollingOrigins";
 
 interface Design {
   name: string;
@@ -25,11 +25,6 @@ const DESIGNS: Design[] = [
   { name: "test, seasonal or none, all trends", design: { trends: ["none", "linear", "damped"], seasonalityTest: true, noneWhenSeasonal: false } },
   { name: "test, whole family", design: { trends: ["none", "linear", "damped"], seasonalityTest: true, noneWhenSeasonal: true, noneSeasonalWindow: true } },
 ];
-
-function arg(name: string, fallback: number): number {
-  const i = process.argv.indexOf(name);
-  return i >= 0 ? Number(process.argv[i + 1]) : fallback;
-}
 
 interface Tally {
   smape: number;

@@ -20,7 +20,7 @@
  */
 import { coverageZ, estimationFactor, fitModel, intervalQuantile, predictionInterval, type FittedModel } from "../../src/engine";
 import { loadM3, type M3Series } from "./m3";
-import { rollingOrigins, sample } from "./rollingOrigins";
+import { numberArg as arg, rollingOrigins, sample } from "./rollingOrigins";
 
 interface IntervalDesign {
   name: string;
@@ -35,11 +35,6 @@ const DESIGNS: IntervalDesign[] = [
 ];
 
 const COVERAGES = [0.8, 0.95] as const;
-
-function arg(name: string, fallback: number): number {
-  const i = process.argv.indexOf(name);
-  return i >= 0 ? Number(process.argv[i + 1]) : fallback;
-}
 
 /** Actuals inside each design's interval, per coverage, over the given cuts (history, actuals after it). */
 function tally(cuts: { history: Float64Array; actual: Float64Array; period: number }[]): { inside: number[][]; steps: number } {

@@ -1,4 +1,4 @@
-/** The origins and the sample of the rolling-origin evaluations over the M3 training parts (rolling.ts, rollingIntervals.ts). */
+/** The origins, the sample and the options of the rolling-origin evaluations over the M3 training parts (rolling.ts, rollingIntervals.ts). */
 import type { M3Series } from "./m3";
 
 /**
@@ -25,4 +25,10 @@ export function sample<T>(all: T[], count: number, seed: number): T[] {
     [copy[i], copy[j]] = [copy[j], copy[i]];
   }
   return copy.slice(0, Math.min(count, copy.length));
+}
+
+/** A numeric option of the command line (--series 200), or the fallback when it is not given. */
+export function numberArg(name: string, fallback: number): number {
+  const i = process.argv.indexOf(name);
+  return i >= 0 ? Number(process.argv[i + 1]) : fallback;
 }
