@@ -20,7 +20,7 @@ export interface ProjectedBfgsOptions {
   f?: (x: Float64Array) => number;
 }
 
-/** A step that moves no variable by more than this share of its range has converged. */
+/** A step that moves no variable by more than this share of its range (or, unbounded, of its size) has converged. */
 const X_TOL = 1e-11;
 
 /**
@@ -55,6 +55,13 @@ export function projectedBfgs(
     let gmax = 0;
     for (let i = 0; i < d; i++) if (!isHeld(i)) gmax = Math.max(gmax, Math.abs(g[i]));
     for (let i = 0; i < d; i++) H[i * d + i] = gmax > 0 ? 0.1 / gmax : 1;
+  };
+  // What a step is measured against: a bounded variable's range; an unbounded one's own size
+  // (at least 1). Against an infinite range every step of an unbounded variable would count as
+  // no move, and the search would stop while only those variables can still improve.
+  const resolution = (i: number): number => {
+    const range = o.upper[i] - o.lower[i];
+    return Number.isFinite(range) ? range : Math.max(1, Math.abs(x[i]));
   };
   const isHeld = (i: number): boolean => (x[i] <= o.lower[i] && g[i] > 0) || (x[i] >= o.upper[i] && g[i] < 0);
   resetH();
@@ -99,7 +106,7 @@ export function projectedBfgs(
       for (let i = 0; i < d; i++) {
         xn[i] = Math.min(o.upper[i], Math.max(o.lower[i], x[i] + t * dir[i]));
         decrease += g[i] * (xn[i] - x[i]);
-        moved = Math.max(moved, Math.abs(xn[i] - x[i]) / (o.upper[i] - o.lower[i]));
+        moved = Math.max(moved, Math.abs(xn[i] - x[i]) / resolution(i));
       }
       // Steps below the variables' resolution cannot lower f any more: converged.
       if (moved <= X_TOL) break;
