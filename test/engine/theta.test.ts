@@ -76,9 +76,12 @@ describe("Theta method: hand cases and bad input", () => {
       expect(i80.low[h]).toBeLessThan(i80.forecast[h]);
       expect(i95.high[h]).toBeGreaterThan(i80.high[h]);
     }
-    // Deseasonalised widths grow with h (1 + (h - 1) alpha^2).
-    const width = (h: number) => (i95.high[h] - i95.low[h]) / (i95.forecast[h] / (i95.forecast[h] || 1));
-    expect(width(11)).toBeGreaterThan(0);
+    // Divided by its index, the half-width grows as sqrt(1 + (h - 1) alpha^2): the variance of
+    // simple exponential smoothing (Hyndman et al. 2008, ch. 6, class 1).
+    const alpha = fit.smoothing.constants.alpha;
+    const index = (h: number) => fit.indices[(fit.length + h - 1) % 12];
+    const half = (h: number) => (i95.high[h - 1] - i95.forecast[h - 1]) / index(h);
+    for (const h of [2, 6, 12]) expect(half(h) / half(1)).toBeCloseTo(Math.sqrt(1 + (h - 1) * alpha * alpha), 10);
   });
 
   it("too short a history says how many values are needed", () => {
