@@ -2,6 +2,7 @@
  * The Ebb ledger panel's page: plain form controls in a fixed order, so everything can be
  * reached with Tab and read by a screen reader. No logic here; mountLedgerPanel wires it.
  */
+import { AUTO_TRENDS } from "../../engine";
 import { ACTIONS } from "../../ledger/actions";
 import { CAUTIONS, STOCK_CAUTION } from "./cautions";
 import { el } from "./dom";
@@ -76,13 +77,13 @@ export function buildPanelView(): PanelView {
   const seasonality = select("ebb-seasonality", [
     ["multiplicative", "multiplicative (grows with the level)"],
     ["additive", "additive (a steady amount)"],
-    ["auto", "pick the better one by AICc"],
+    ["auto", "auto: none unless a season is found, then the lower AICc"],
   ]);
   const trend = select("ebb-trend", [
     ["linear", "linear"],
     ["damped", "damped (levels off)"],
     ["none", "none"],
-    ["auto", "pick the best one by AICc"],
+    ["auto", `auto: ${AUTO_TRENDS.join(" or ")}, the lower AICc`],
   ]);
   const start = select("ebb-start", [
     ["decomposition", "decomposition of the first seasons"],
