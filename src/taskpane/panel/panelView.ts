@@ -77,7 +77,7 @@ export function buildPanelView(): PanelView {
   const seasonality = select("ebb-seasonality", [
     ["multiplicative", "multiplicative (grows with the level)"],
     ["additive", "additive (a steady amount)"],
-    ["auto", "auto: none unless a season is found, then the lower AICc"],
+    ["auto", "auto: tested; none if no season found"],
   ]);
   const trend = select("ebb-trend", [
     ["linear", "linear"],
