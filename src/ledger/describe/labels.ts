@@ -206,7 +206,11 @@ export const OUTLOOK_COLUMNS = {
   period: { label: "Period", note: "From period + steps ahead." },
   steps: { label: "Steps ahead", note: "How many periods after the last actual." },
   position: { label: "Position in season", note: "Which period of the season this is." },
-  multiplier: { label: "Trend multiplier", note: "phi + phi^2 + ... + phi^steps (equal to the steps when phi is 1)." },
+  multiplier: {
+    label: "Trend multiplier",
+    note: "phi + phi^2 + ... + phi^steps (equal to the steps when phi is 1).",
+    noteNoTrend: "phi + phi^2 + ... + phi^steps (equal to the steps, as phi is 1). This model has no trend: the trend it multiplies is 0, so it adds nothing to the forecast.",
+  },
   index: { label: "Seasonal index used", note: "The latest seasonal index at this position: from the update table's last season." },
   forecast: {
     label: "Forecast",

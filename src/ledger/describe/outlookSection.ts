@@ -74,7 +74,7 @@ export function outlookSection(ctx: SectionContext): OutlookRowCells[] {
     period: OUTLOOK_COLUMNS.period,
     steps: OUTLOOK_COLUMNS.steps,
     position: OUTLOOK_COLUMNS.position,
-    multiplier: OUTLOOK_COLUMNS.multiplier,
+    multiplier: { label: OUTLOOK_COLUMNS.multiplier.label, note: model.spec.trend === "none" ? OUTLOOK_COLUMNS.multiplier.noteNoTrend : OUTLOOK_COLUMNS.multiplier.note },
     index: OUTLOOK_COLUMNS.index,
     forecast: {
       label: OUTLOOK_COLUMNS.forecast.label,
