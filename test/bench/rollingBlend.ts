@@ -17,8 +17,8 @@
  * the share of actuals inside the 80% / 95% intervals, per frequency and evaluation.
  */
 import { fitModel, fitTheta, maseScale, predictionInterval, smape, thetaInterval, type Interval } from "../../src/engine";
-import { loadM3, type M3Series } from "./m3";
-import { numberArg as arg, rollingOrigins, sample } from "./rollingOrigins";
+import { loadM3 } from "./m3";
+import { holdoutCuts, numberArg as arg, rollingCuts, sample, type Cut } from "./rollingOrigins";
 
 const COVERAGES = [0.8, 0.95] as const;
 
@@ -67,7 +67,7 @@ interface Tally {
 
 const METHODS = ["automatic model", "Theta method", "mean, quantiles averaged", "mean, envelope"] as const;
 
-function evaluate(cuts: { history: Float64Array; actual: Float64Array; period: number }[]): Map<string, Tally> {
+function evaluate(cuts: Cut[]): Map<string, Tally> {
   const tallies = new Map<string, Tally>(METHODS.map((m) => [m, { smape: 0, mase: 0, n: 0, nMase: 0, inside: COVERAGES.map(() => 0), steps: 0 }]));
   for (const { history, actual, period } of cuts) {
     const h = actual.length;
@@ -98,14 +98,6 @@ function evaluate(cuts: { history: Float64Array; actual: Float64Array; period: n
     });
   }
   return tallies;
-}
-
-function rollingCuts(series: M3Series[]) {
-  return series.flatMap((s) => rollingOrigins(s).map((o) => ({ history: s.train.subarray(0, o), actual: s.train.subarray(o, o + s.horizon), period: s.period })));
-}
-
-function holdoutCuts(series: M3Series[]) {
-  return series.map((s) => ({ history: s.train, actual: s.test, period: s.period }));
 }
 
 const seed = arg("--seed", 20260);

@@ -19,8 +19,8 @@
  * N series per frequency (default: all), drawn with a fixed seed.
  */
 import { coverageZ, estimationFactor, fitModel, intervalQuantile, predictionInterval, type FittedModel } from "../../src/engine";
-import { loadM3, type M3Series } from "./m3";
-import { numberArg as arg, rollingOrigins, sample } from "./rollingOrigins";
+import { loadM3 } from "./m3";
+import { holdoutCuts, numberArg as arg, rollingCuts, sample, type Cut } from "./rollingOrigins";
 
 interface IntervalDesign {
   name: string;
@@ -37,7 +37,7 @@ const DESIGNS: IntervalDesign[] = [
 const COVERAGES = [0.8, 0.95] as const;
 
 /** Actuals inside each design's interval, per coverage, over the given cuts (history, actuals after it). */
-function tally(cuts: { history: Float64Array; actual: Float64Array; period: number }[]): { inside: number[][]; steps: number } {
+function tally(cuts: Cut[]): { inside: number[][]; steps: number } {
   const inside = DESIGNS.map(() => COVERAGES.map(() => 0));
   let steps = 0;
   for (const { history, actual, period } of cuts) {
@@ -62,14 +62,6 @@ function tally(cuts: { history: Float64Array; actual: Float64Array; period: numb
     steps += h;
   }
   return { inside, steps };
-}
-
-function rollingCuts(series: M3Series[]) {
-  return series.flatMap((s) => rollingOrigins(s).map((o) => ({ history: s.train.subarray(0, o), actual: s.train.subarray(o, o + s.horizon), period: s.period })));
-}
-
-function holdoutCuts(series: M3Series[]) {
-  return series.map((s) => ({ history: s.train, actual: s.test, period: s.period }));
 }
 
 const seed = arg("--seed", 20260);

@@ -1,4 +1,4 @@
-/** The origins, the sample and the options of the rolling-origin evaluations over the M3 training parts (rolling.ts, rollingIntervals.ts). */
+/** The origins, the cuts, the sample and the options of the rolling-origin evaluations over the M3 training parts (rolling.ts, rollingIntervals.ts, rollingBlend.ts). */
 import type { M3Series } from "./m3";
 
 /**
@@ -8,6 +8,23 @@ import type { M3Series } from "./m3";
 export function rollingOrigins(s: M3Series): number[] {
   const h = s.horizon;
   return [h, h + Math.ceil(h / 2), h + 2 * Math.ceil(h / 2)].map((back) => s.train.length - back).filter((origin) => origin >= 3 * s.period);
+}
+
+/** One forecast to score: the history it is made from and the actuals that follow it. */
+export interface Cut {
+  history: Float64Array;
+  actual: Float64Array;
+  period: number;
+}
+
+/** Every rolling origin of every series' training part, each followed by up to one horizon of actuals. */
+export function rollingCuts(series: M3Series[]): Cut[] {
+  return series.flatMap((s) => rollingOrigins(s).map((o) => ({ history: s.train.subarray(0, o), actual: s.train.subarray(o, o + s.horizon), period: s.period })));
+}
+
+/** The competition's own cut: the whole training part, then the holdout. */
+export function holdoutCuts(series: M3Series[]): Cut[] {
+  return series.map((s) => ({ history: s.train, actual: s.test, period: s.period }));
 }
 
 /** Deterministic sample (mulberry32 shuffle with a fixed seed). */
