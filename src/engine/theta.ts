@@ -7,6 +7,7 @@ import { checkHorizon, fitOne, forecastModel } from "./model";
 import { leadingBlanks } from "./start/decompositionStart";
 import { passesSeasonalityTest } from "./seasonalityTest";
 import { countPresent } from "./series";
+import { modelShape, requiredLength } from "./shape";
 import type { FittedModel } from "./types";
 
 /**
@@ -41,7 +42,8 @@ export interface ThetaFit {
 /** Fit the Theta method to a history with season length p (1 or less: not seasonal). */
 export function fitTheta(history: Float64Array, p: number): ThetaFit {
   const y = history.subarray(leadingBlanks(history));
-  if (countPresent(y) < 4) throw notEnough(4, countPresent(y), "values", "The Theta method fits a level, its smoothing constant and a drift; add more history.");
+  const needed = requiredLength(modelShape({ period: 1, seasonality: "none", trend: "none", start: "optimized", cycles: 2 }), 1);
+  if (countPresent(y) < needed) throw notEnough(needed, countPresent(y), "values", "The Theta method fits a level, its smoothing constant and a drift; add more history.");
   const seasonal = p >= 2 && passesSeasonalityTest(y, p);
   const indices = seasonal ? classicalIndices(y, p, "multiplicative").normal : new Float64Array(0);
   const adjusted = new Float64Array(y.length);

@@ -84,7 +84,9 @@ describe("Theta method: hand cases and bad input", () => {
     for (const h of [2, 6, 12]) expect(half(h) / half(1)).toBeCloseTo(Math.sqrt(1 + (h - 1) * alpha * alpha), 10);
   });
 
-  it("too short a history says how many values are needed", () => {
-    expect(() => fitTheta(Float64Array.from([5, 6, NaN]), 1)).toThrow(/4/);
+  it("too short a history says how many values are needed, and that many are enough", () => {
+    // Simple exponential smoothing with a fitted start needs 5 values (shape.ts requiredLength).
+    expect(() => fitTheta(Float64Array.from([5, 6, NaN, 7]), 1)).toThrow(/needs 5|5 values/);
+    expect(() => fitTheta(Float64Array.from([5, 6, 8, 7, 9]), 1)).not.toThrow();
   });
 });
