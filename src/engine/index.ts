@@ -11,7 +11,7 @@ export { optimizedStart } from "./start/optimizedStart";
 export { runRecursion, projectState, trendMultipliers, sumSquaredErrors, RecursionWorkspace } from "./recursion";
 export { fitConstants, PHI_LOWER, PHI_UPPER } from "./fit";
 export { aic, aicc } from "./aicc";
-export { fitModel, fitOne, modelStates, forecastModel, resolvePeriod, checkHorizon, AUTO_DESIGN, AUTO_TRENDS, type AutoDesign, type ModelOptions } from "./model";
+export { fitModel, fitCandidates, fitOne, modelStates, forecastModel, resolvePeriod, checkHorizon, AUTO_DESIGN, AUTO_TRENDS, type AutoDesign, type ModelOptions } from "./model";
 export { passesSeasonalityTest } from "./seasonalityTest";
 export { fitTheta, thetaForecast, thetaInterval, type ThetaFit } from "./theta";
 export { predictionInterval, coverageZ, intervalQuantile, errorQuantile, estimationFactor, forecastVariance, forecastRelativeSd, additiveIntervalWeights, varianceDivisor, varianceIsThin, oneStepVariance, oneStepRelativeSd, checkCoverage, type Interval } from "./intervals";

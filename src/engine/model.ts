@@ -8,7 +8,7 @@ import { allPositive, cleanHistory, countPresent, requirePositive } from "./seri
 import { classicStart } from "./start/classicStart";
 import { decompositionStart, leadingBlanks } from "./start/decompositionStart";
 import { passesSeasonalityTest } from "./seasonalityTest";
-import { lowestAicc, scoreAlike } from "./selection";
+import { lowestAicc, scoreAlike, type Scored } from "./selection";
 import { optimizedStart } from "./start/optimizedStart";
 import { isSeasonal, modelShape, parameterCount, requiredLength } from "./shape";
 import type { FittedModel, Seasonality, Start, StartMethod, StateTable, TrendKind } from "./types";
@@ -71,6 +71,16 @@ export function resolvePeriod(y: Float64Array, period: number | undefined): numb
  * the same update window and the one with the lowest AICc is returned.
  */
 export function fitModel(history: ArrayLike<number | null | undefined>, options: ModelOptions = {}, design: AutoDesign = AUTO_DESIGN): FittedModel {
+  const candidates = fitCandidates(history, options, design);
+  return candidates.length === 1 ? candidates[0].model : lowestAicc(candidates);
+}
+
+/**
+ * Every candidate the options allow, fitted and scored alike ({@link scoreAlike}); one when
+ * seasonality and trend are both named. Candidates that cannot be fitted (too short a history
+ * for their start window) are left out; when none can, the first one's error is thrown.
+ */
+export function fitCandidates(history: ArrayLike<number | null | undefined>, options: ModelOptions = {}, design: AutoDesign = AUTO_DESIGN): Scored[] {
   const y = history instanceof Float64Array ? history : cleanHistory(history);
   if (countPresent(y) === 0) throw notEnough(1, 0);
   const p = resolvePeriod(y, options.period);
@@ -88,7 +98,7 @@ export function fitModel(history: ArrayLike<number | null | undefined>, options:
     options.seasonality === "none" ? (["none"] as Seasonality[]) : seasonalityCandidates(y, p, parseSeasonality(options.seasonality), design);
   const trendChoice = parseTrend(options.trend);
   const trends: TrendKind[] = trendChoice === "auto" ? design.trends : [trendChoice];
-  if (seasonalities.length * trends.length === 1) return fitOne(y, p, seasonalities[0], trends[0], start, cycles, fixed);
+  if (seasonalities.length * trends.length === 1) return scoreAlike([fitOne(y, p, seasonalities[0], trends[0], start, cycles, fixed)]);
   const fitted: FittedModel[] = [];
   let firstError: unknown;
   for (const s of seasonalities) {
@@ -102,7 +112,7 @@ export function fitModel(history: ArrayLike<number | null | undefined>, options:
     }
   }
   if (fitted.length === 0) throw firstError;
-  return lowestAicc(scoreAlike(fitted));
+  return scoreAlike(fitted);
 }
 
 function seasonalityCandidates(y: Float64Array, p: number, choice: SeasonalityChoice, design: AutoDesign): Seasonality[] {
