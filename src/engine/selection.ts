@@ -43,12 +43,21 @@ export function scoreAlike(models: FittedModel[]): Scored[] {
   });
 }
 
+/**
+ * The criterion candidates are compared on: AICc, or AIC when none has enough errors for AICc's
+ * correction. Candidates without a finite value under the chosen criterion are left out.
+ */
+export function comparable(scored: Scored[]): { pool: Scored[]; value: (s: Scored) => number } {
+  const withAicc = scored.filter((s) => Number.isFinite(s.aicc));
+  if (withAicc.length > 0) return { pool: withAicc, value: (s) => s.aicc };
+  return { pool: scored.filter((s) => Number.isFinite(s.aic)), value: (s) => s.aic };
+}
+
 /** The candidate with the lowest AICc; AIC when none has enough errors for AICc's correction. */
 export function lowestAicc(scored: Scored[]): FittedModel {
-  const withAicc = scored.filter((s) => Number.isFinite(s.aicc));
-  const pool = withAicc.length > 0 ? withAicc : scored;
-  const key = withAicc.length > 0 ? (s: Scored) => s.aicc : (s: Scored) => s.aic;
+  const { pool, value } = comparable(scored);
+  if (pool.length === 0) return scored[0].model;
   let best = pool[0];
-  for (const s of pool) if (key(s) < key(best)) best = s;
+  for (const s of pool) if (value(s) < value(best)) best = s;
   return best.model;
 }
