@@ -1,0 +1,138 @@
+/**
+ * The designs compared for item 3 of the automatic model (combination), and their scoring on a
+ * set of cuts (rolling origins or holdouts). Used by rollingBlend.ts (M3 or public series, on the
+ * command line) and by the bench's "public" section.
+ *
+ * Combinations of point forecasts (the engine's combineIntervals: forecasts and interval ends
+ * averaged with the weights, the averaging of quantiles of Lichtendahl, Grushka-Cockayne &
+ * Winkler 2013, Management Science 59(7)):
+ * - the simple mean of the automatic model and the Theta method (src/engine/theta.ts), the
+ *   combination that is hard to beat (Clemen 1989, IJF 5(4); Makridakis & Hibon 2000);
+ * - weights inversely proportional to each member's in-sample one-step MSE (Bates & Granger
+ *   1969, "The combination of forecasts", Operational Research Quarterly 20(4));
+ * - Akaike weights (the engine's akaikeWeights; Kolassa 2011, IJF 27(2)) over the automatic
+ *   model's own candidates, and over the whole family (every trend, and the non-seasonal
+ *   candidates beside the seasonal ones).
+ */
+import {
+  akaikeWeights,
+  AUTO_DESIGN,
+  combineIntervals,
+  fitCandidates,
+  fitTheta,
+  lowestAicc,
+  maseScale,
+  predictionInterval,
+  smape,
+  thetaInterval,
+  type AutoDesign,
+  type FittedModel,
+  type Interval,
+} from "../../src/engine";
+import type { Cut } from "./rollingOrigins";
+
+export const COVERAGES = [0.8, 0.95] as const;
+
+/** One method's interval at each coverage (the forecast is each band's), with its in-sample one-step MSE. */
+type Outlook = { bands: Interval[]; mse: number };
+
+function modelOutlook(m: FittedModel, h: number): Outlook {
+  return { bands: COVERAGES.map((c) => predictionInterval(m, h, c)), mse: m.sse / m.errorCount };
+}
+
+function thetaOutlook(history: Float64Array, period: number, h: number): Outlook {
+  const fit = fitTheta(history, period);
+  // The smoothing's errors are on the adjusted scale; back on the data's scale through the indices.
+  const s = fit.smoothing;
+  return { bands: COVERAGES.map((c) => thetaInterval(fit, h, c)), mse: (s.sse / s.errorCount) * meanSquareIndex(fit.indices) };
+}
+
+const meanSquareIndex = (indices: Float64Array) => (indices.length === 0 ? 1 : indices.reduce((a, v) => a + v * v, 0) / indices.length);
+
+function weighted(members: Outlook[], weights: number[]): Outlook {
+  return { bands: COVERAGES.map((_, ci) => combineIntervals(members.map((m) => m.bands[ci]), weights)), mse: NaN };
+}
+
+/** The lowest-AICc candidate and the Akaike-weighted combination of all of them, for one design. */
+function akaike(history: Float64Array, period: number, h: number, design: AutoDesign): { best: Outlook; blend: Outlook } {
+  const scored = fitCandidates(history, { period, seasonality: "auto", trend: "auto" }, design);
+  const weights = akaikeWeights(scored).filter((w) => w.weight > 0);
+  return { best: modelOutlook(lowestAicc(scored), h), blend: weighted(weights.map((w) => modelOutlook(w.model, h)), weights.map((w) => w.weight)) };
+}
+
+const WHOLE_FAMILY: AutoDesign = { trends: ["none", "linear", "damped"], seasonalityTest: true, noneWhenSeasonal: true };
+
+export const METHODS = [
+  "automatic model",
+  "Theta method",
+  "auto + Theta, equal",
+  "auto + Theta, inverse MSE",
+  "Akaike weights, auto's candidates",
+  "whole family, lowest AICc",
+  "Akaike weights, whole family",
+  "family Akaike + Theta, equal",
+] as const;
+
+/** Every method's outlook for one cut, in the order of METHODS. */
+function outlooks(history: Float64Array, period: number, h: number): Outlook[] {
+  const auto = akaike(history, period, h, AUTO_DESIGN);
+  const family = akaike(history, period, h, WHOLE_FAMILY);
+  const theta = thetaOutlook(history, period, h);
+  return [
+    auto.best,
+    theta,
+    weighted([auto.best, theta], [1, 1]),
+    weighted([auto.best, theta], [1 / auto.best.mse, 1 / theta.mse]),
+    auto.blend,
+    family.best,
+    family.blend,
+    weighted([family.blend, theta], [1, 1]),
+  ];
+}
+
+export interface Tally {
+  smape: number;
+  mase: number;
+  /** Forecasts scored, and those with a MASE scale. */
+  n: number;
+  nMase: number;
+  /** Actuals inside the interval at each of COVERAGES, of `steps` actuals. */
+  inside: number[];
+  steps: number;
+  /** Cuts where some method could not forecast (left out for every method, like for like). */
+  skipped: number;
+}
+
+export function evaluateDesigns(cuts: Cut[]): Tally[] {
+  const tallies: Tally[] = METHODS.map(() => ({ smape: 0, mase: 0, n: 0, nMase: 0, inside: COVERAGES.map(() => 0), steps: 0, skipped: 0 }));
+  for (const { history, actual, period } of cuts) {
+    const h = actual.length;
+    let all: Outlook[];
+    try {
+      all = outlooks(history, period, h);
+    } catch {
+      tallies.forEach((t) => t.skipped++);
+      continue;
+    }
+    const scale = maseScale(history, period);
+    all.forEach((o, i) => {
+      const tally = tallies[i];
+      const forecast = o.bands[0].forecast;
+      tally.smape += smape(actual, forecast);
+      tally.n++;
+      if (scale > 0) tally.mase += meanAbsoluteError(actual, forecast) / scale;
+      if (scale > 0) tally.nMase++;
+      o.bands.forEach((band, ci) => {
+        for (let k = 0; k < h; k++) if (actual[k] >= band.low[k] && actual[k] <= band.high[k]) tally.inside[ci]++;
+      });
+      tally.steps += h;
+    });
+  }
+  return tallies;
+}
+
+export function meanAbsoluteError(actual: ArrayLike<number>, forecast: ArrayLike<number>): number {
+  let abs = 0;
+  for (let k = 0; k < actual.length; k++) abs += Math.abs(actual[k] - forecast[k]);
+  return abs / actual.length;
+}
