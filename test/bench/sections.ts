@@ -4,6 +4,7 @@
  * touches this table and the section's own file only. `npm run bench -- --only NAME` runs one.
  */
 import { batchBenchmark, renderBatchSection } from "./batch";
+import { renderDesignBench, runDesignBench } from "./designs";
 import { renderLedgerBench, runLedgerBench } from "./ledger";
 import type { M3Series } from "./m3";
 import { renderOrder, runOrderBench } from "./order";
@@ -33,6 +34,7 @@ export interface BenchSection {
 export const SECTIONS: BenchSection[] = [
   { name: "order", run: (c) => renderOrder(runOrderBench(c.monthly, c.quarterly, c.quick, c.progress)) },
   { name: "signals", run: (c) => renderSignals(runSignalBench(c.quick ? c.monthly : c.allMonthly, c.allQuarterly, c.quick, c.progress)) },
+  { name: "designs", run: (c) => renderDesignBench(runDesignBench(c.monthly, c.quarterly, c.progress)) },
   { name: "ledger", run: async (c) => renderLedgerBench(await runLedgerBench(c.quick, c.progress)) },
   { name: "batch", last: true, run: async (c) => renderBatchSection(await batchBenchmark(c.quick, c.progress)) },
 ];
