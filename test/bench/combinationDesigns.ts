@@ -10,6 +10,11 @@
  *   combination that is hard to beat (Clemen 1989, IJF 5(4); Makridakis & Hibon 2000);
  * - weights inversely proportional to each member's in-sample one-step MSE (Bates & Granger
  *   1969, "The combination of forecasts", Operational Research Quarterly 20(4));
+ * - weights inversely proportional to each member's MSE over the last h values of the history,
+ *   forecast from an inner origin h back (Bates & Granger 1969 on out-of-sample errors at the
+ *   horizon used; Stock & Watson 2004, J. Forecasting 23(6)), and the single member that did
+ *   better there (selection by validation; Tashman 2000); equal weights where the inner
+ *   history is too short to fit;
  * - Akaike weights (the engine's akaikeWeights; Kolassa 2011, IJF 27(2)) over the automatic
  *   model's own candidates, and over the whole family (every trend, and the non-seasonal
  *   candidates beside the seasonal ones).
@@ -71,13 +76,42 @@ export const METHODS = [
   "whole family, lowest AICc",
   "Akaike weights, whole family",
   "family Akaike + Theta, equal",
+  "auto + Theta, inverse validation MSE",
+  "better of auto, Theta on validation",
 ] as const;
+
+/** The automatic model's and the Theta method's MSE on the last h values, forecast from h back; null when too short. */
+function validationMse(history: Float64Array, period: number, h: number): [number, number] | null {
+  const inner = history.subarray(0, history.length - h);
+  const held = history.subarray(history.length - h);
+  try {
+    const auto = lowestAicc(fitCandidates(inner, { period, seasonality: "auto", trend: "auto" }, AUTO_DESIGN));
+    const theta = fitTheta(inner, period);
+    return [meanSquaredError(held, predictionInterval(auto, h, 0.8).forecast), meanSquaredError(held, thetaInterval(theta, h, 0.8).forecast)];
+  } catch {
+    return null;
+  }
+}
+
+function meanSquaredError(actual: ArrayLike<number>, forecast: ArrayLike<number>): number {
+  let sum = 0;
+  for (let k = 0; k < actual.length; k++) sum += (actual[k] - forecast[k]) ** 2;
+  return sum / actual.length;
+}
+
+/** Inverse-MSE weights, equal when either MSE is unknown or zero. */
+function inverseWeights(mse: [number, number] | null): number[] {
+  if (mse === null || !(mse[0] > 0) || !(mse[1] > 0)) return [1, 1];
+  return [1 / mse[0], 1 / mse[1]];
+}
 
 /** Every method's outlook for one cut, in the order of METHODS. */
 function outlooks(history: Float64Array, period: number, h: number): Outlook[] {
   const auto = akaike(history, period, h, AUTO_DESIGN);
   const family = akaike(history, period, h, WHOLE_FAMILY);
   const theta = thetaOutlook(history, period, h);
+  const validation = validationMse(history, period, h);
+  const validationWeights = inverseWeights(validation);
   return [
     auto.best,
     theta,
@@ -87,6 +121,8 @@ function outlooks(history: Float64Array, period: number, h: number): Outlook[] {
     family.best,
     family.blend,
     weighted([family.blend, theta], [1, 1]),
+    weighted([auto.best, theta], validationWeights),
+    validationWeights[1] > validationWeights[0] ? theta : auto.best,
   ];
 }
 

@@ -24,7 +24,7 @@ for (const frequency of ["monthly", "quarterly"] as const) {
     console.log(`\n${onPublic ? "public " : "M3 "}${frequency}, ${name}: ${series.length} series; sMAPE, MASE, share inside the 80% / 95% interval${skipped}`);
     tallies.forEach((t, i) => {
       const cover = t.inside.map((v) => ((100 * v) / t.steps).toFixed(1)).join(" / ");
-      console.log(`  ${METHODS[i].padEnd(34)} ${(t.smape / t.n).toFixed(2).padStart(6)}  ${(t.mase / t.nMase).toFixed(3)}  ${cover}   (${t.n} forecasts)`);
+      console.log(`  ${METHODS[i].padEnd(38)} ${(t.smape / t.n).toFixed(2).padStart(6)}  ${(t.mase / t.nMase).toFixed(3)}  ${cover}   (${t.n} forecasts)`);
     });
   }
 }
