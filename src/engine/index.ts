@@ -17,6 +17,7 @@ export { lowestAicc, type Scored } from "./selection";
 export { fitModel, fitCandidates, fitOne, modelStates, forecastModel, resolvePeriod, checkHorizon, AUTO_DESIGN, AUTO_TRENDS, type AutoDesign, type ModelOptions } from "./model";
 export { passesSeasonalityTest } from "./seasonalityTest";
 export { fitTheta, thetaForecast, thetaInterval, type ThetaFit } from "./theta";
+export { fitOptimizedTheta, optimizedThetaForecast, optimizedThetaInterval, thetaOf, type OptimizedThetaFit } from "./optimizedTheta";
 export { predictionInterval, coverageZ, intervalQuantile, errorQuantile, estimationFactor, forecastVariance, forecastRelativeSd, additiveIntervalWeights, varianceDivisor, varianceIsThin, oneStepVariance, oneStepRelativeSd, checkCoverage, type Interval } from "./intervals";
 export { holdoutScore, rollingBacktest, seasonalNaiveScale, type HoldoutResult, type BacktestRow } from "./backtest";
 export { detectPeriod } from "./period";

@@ -1,13 +1,12 @@
 import studentQuantile from "@stdlib/stats-base-dists-t-quantile";
-import { classicalIndices, leastSquaresLine } from "./decompose";
+import { leastSquaresLine } from "./decompose";
 import { notEnough } from "./errors";
 import type { Interval } from "./intervals";
 import { checkCoverage } from "./intervals";
 import { checkHorizon, fitOne, forecastModel } from "./model";
-import { leadingBlanks } from "./start/decompositionStart";
-import { passesSeasonalityTest } from "./seasonalityTest";
 import { countPresent } from "./series";
 import { modelShape, requiredLength } from "./shape";
+import { thetaAdjusted } from "./thetaAdjusted";
 import type { FittedModel } from "./types";
 
 /**
@@ -41,18 +40,14 @@ export interface ThetaFit {
 
 /** Fit the Theta method to a history with season length p (1 or less: not seasonal). */
 export function fitTheta(history: Float64Array, p: number): ThetaFit {
-  const y = history.subarray(leadingBlanks(history));
+  const { y, indices, adjusted } = thetaAdjusted(history, p);
   const needed = requiredLength(modelShape({ period: 1, seasonality: "none", trend: "none", start: "optimized", cycles: 2 }), 1);
   if (countPresent(y) < needed) throw notEnough(needed, countPresent(y), "values", "The Theta method fits a level, its smoothing constant and a drift; add more history.");
-  const seasonal = p >= 2 && passesSeasonalityTest(y, p);
-  const indices = seasonal ? classicalIndices(y, p, "multiplicative").normal : new Float64Array(0);
-  const adjusted = new Float64Array(y.length);
-  for (let t = 0; t < y.length; t++) adjusted[t] = seasonal ? y[t] / indices[t % p] : y[t];
   const smoothing = fitOne(adjusted, 1, "none", "none", "optimized", 2, {});
   const x = new Float64Array(y.length);
   for (let t = 0; t < y.length; t++) x[t] = t;
   const drift = leastSquaresLine(x, adjusted).slope / 2;
-  return { indices, smoothing, drift, length: y.length, estimated: 3 + (seasonal ? p - 1 : 0) };
+  return { indices, smoothing, drift, length: y.length, estimated: 3 + (indices.length > 0 ? indices.length - 1 : 0) };
 }
 
 /** The drift carried h periods ahead (h from 1): b ((h - 1) + (1 - (1 - alpha)^n) / alpha). */
