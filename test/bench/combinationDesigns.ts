@@ -15,6 +15,9 @@
  *   horizon used; Stock & Watson 2004, J. Forecasting 23(6)), and the single member that did
  *   better there (selection by validation; Tashman 2000); equal weights where the inner
  *   history is too short to fit;
+ * - the optimised Theta model, static and dynamic (src/engine/optimizedTheta.ts; Fiorucci et al.
+ *   2016, IJF 32(4)): theta fitted, so a strong trend is carried at more than half its slope; alone
+ *   and in an equal mean with the automatic model (and with the Theta method);
  * - Akaike weights (the engine's akaikeWeights; Kolassa 2011, IJF 27(2)) over the automatic
  *   model's own candidates, and over the whole family (every trend, and the non-seasonal
  *   candidates beside the seasonal ones).
@@ -24,9 +27,11 @@ import {
   AUTO_DESIGN,
   combineIntervals,
   fitCandidates,
+  fitOptimizedTheta,
   fitTheta,
   lowestAicc,
   maseScale,
+  optimizedThetaInterval,
   predictionInterval,
   smape,
   thetaInterval,
@@ -50,6 +55,11 @@ function thetaOutlook(history: Float64Array, period: number, h: number): Outlook
   // The smoothing's errors are on the adjusted scale; back on the data's scale through the indices.
   const s = fit.smoothing;
   return { bands: COVERAGES.map((c) => thetaInterval(fit, h, c)), mse: (s.sse / s.errorCount) * meanSquareIndex(fit.indices) };
+}
+
+function optimizedThetaOutlook(history: Float64Array, period: number, h: number, dynamic: boolean): Outlook {
+  const fit = fitOptimizedTheta(history, period, { dynamic });
+  return { bands: COVERAGES.map((c) => optimizedThetaInterval(fit, h, c)), mse: (fit.sse / fit.errorCount) * meanSquareIndex(fit.indices) };
 }
 
 const meanSquareIndex = (indices: Float64Array) => (indices.length === 0 ? 1 : indices.reduce((a, v) => a + v * v, 0) / indices.length);
@@ -78,6 +88,11 @@ export const METHODS = [
   "family Akaike + Theta, equal",
   "auto + Theta, inverse validation MSE",
   "better of auto, Theta on validation",
+  "optimised Theta, static",
+  "auto + static optimised Theta, equal",
+  "dynamic optimised Theta",
+  "auto + dynamic optimised Theta, equal",
+  "auto + Theta + dynamic opt. Theta, equal",
 ] as const;
 
 /** The automatic model's and the Theta method's MSE on the last h values, forecast from h back; null when too short. */
@@ -110,6 +125,8 @@ function outlooks(history: Float64Array, period: number, h: number): Outlook[] {
   const auto = akaike(history, period, h, AUTO_DESIGN);
   const family = akaike(history, period, h, WHOLE_FAMILY);
   const theta = thetaOutlook(history, period, h);
+  const optimized = optimizedThetaOutlook(history, period, h, false);
+  const dynamic = optimizedThetaOutlook(history, period, h, true);
   const validation = validationMse(history, period, h);
   const validationWeights = inverseWeights(validation);
   return [
@@ -123,6 +140,11 @@ function outlooks(history: Float64Array, period: number, h: number): Outlook[] {
     weighted([family.blend, theta], [1, 1]),
     weighted([auto.best, theta], validationWeights),
     validationWeights[1] > validationWeights[0] ? theta : auto.best,
+    optimized,
+    weighted([auto.best, optimized], [1, 1]),
+    dynamic,
+    weighted([auto.best, dynamic], [1, 1]),
+    weighted([auto.best, theta, dynamic], [1, 1, 1]),
   ];
 }
 
