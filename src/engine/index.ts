@@ -18,6 +18,7 @@ export { fitModel, fitCandidates, fitOne, modelStates, forecastModel, resolvePer
 export { passesSeasonalityTest } from "./seasonalityTest";
 export { fitTheta, thetaForecast, thetaInterval, type ThetaFit } from "./theta";
 export { fitOptimizedTheta, optimizedThetaForecast, optimizedThetaInterval, thetaOf, type OptimizedThetaFit } from "./optimizedTheta";
+export { thetaAdjusted } from "./thetaAdjusted";
 export { predictionInterval, coverageZ, intervalQuantile, errorQuantile, estimationFactor, forecastVariance, forecastRelativeSd, additiveIntervalWeights, varianceDivisor, varianceIsThin, oneStepVariance, oneStepRelativeSd, checkCoverage, type Interval } from "./intervals";
 export { holdoutScore, rollingBacktest, seasonalNaiveScale, type HoldoutResult, type BacktestRow } from "./backtest";
 export { detectPeriod } from "./period";

@@ -18,6 +18,10 @@
  * - the optimised Theta model, static and dynamic (src/engine/optimizedTheta.ts; Fiorucci et al.
  *   2016, IJF 32(4)): theta fitted, so a strong trend is carried at more than half its slope; alone
  *   and in an equal mean with the automatic model (and with the Theta method);
+ * - the M4 competition's "Comb" benchmark (simple, Holt and damped smoothing of the adjusted
+ *   history, equal weights), alone and with the automatic model;
+ * - the automatic model with the optimised start (initial states fitted with the constants),
+ *   alone and with the Theta method;
  * - Akaike weights (the engine's akaikeWeights; Kolassa 2011, IJF 27(2)) over the automatic
  *   model's own candidates, and over the whole family (every trend, and the non-seasonal
  *   candidates beside the seasonal ones).
@@ -27,6 +31,7 @@ import {
   AUTO_DESIGN,
   combineIntervals,
   fitCandidates,
+  fitOne,
   fitOptimizedTheta,
   fitTheta,
   lowestAicc,
@@ -34,6 +39,7 @@ import {
   optimizedThetaInterval,
   predictionInterval,
   smape,
+  thetaAdjusted,
   thetaInterval,
   type AutoDesign,
   type FittedModel,
@@ -62,6 +68,27 @@ function optimizedThetaOutlook(history: Float64Array, period: number, h: number,
   return { bands: COVERAGES.map((c) => optimizedThetaInterval(fit, h, c)), mse: (fit.sse / fit.errorCount) * meanSquareIndex(fit.indices) };
 }
 
+/**
+ * The M4 competition's "Comb" benchmark (Makridakis, Spiliotis & Assimakopoulos 2020, IJF 36(1)):
+ * simple, Holt and damped exponential smoothing on the classically adjusted history (the Theta
+ * methods' adjustment), averaged with equal weights and put back on the data's scale.
+ */
+function combOutlook(history: Float64Array, period: number, h: number): Outlook {
+  const { adjusted, indices, y } = thetaAdjusted(history, period);
+  const p = indices.length;
+  const index = (k: number) => (p === 0 ? 1 : indices[(y.length + k) % p]);
+  const members = (["none", "linear", "damped"] as const).map((trend) => {
+    const m = fitOne(adjusted, 1, "none", trend, "optimized", 2, {});
+    return { bands: COVERAGES.map((c) => rescale(predictionInterval(m, h, c), index)), mse: (m.sse / m.errorCount) * meanSquareIndex(indices) };
+  });
+  return weighted(members, [1, 1, 1]);
+}
+
+function rescale(band: Interval, index: (k: number) => number): Interval {
+  const by = (a: Float64Array) => a.map((v, k) => v * index(k));
+  return { forecast: by(band.forecast), low: by(band.low), high: by(band.high) };
+}
+
 const meanSquareIndex = (indices: Float64Array) => (indices.length === 0 ? 1 : indices.reduce((a, v) => a + v * v, 0) / indices.length);
 
 function weighted(members: Outlook[], weights: number[]): Outlook {
@@ -69,8 +96,8 @@ function weighted(members: Outlook[], weights: number[]): Outlook {
 }
 
 /** The lowest-AICc candidate and the Akaike-weighted combination of all of them, for one design. */
-function akaike(history: Float64Array, period: number, h: number, design: AutoDesign): { best: Outlook; blend: Outlook } {
-  const scored = fitCandidates(history, { period, seasonality: "auto", trend: "auto" }, design);
+function akaike(history: Float64Array, period: number, h: number, design: AutoDesign, start?: "optimized"): { best: Outlook; blend: Outlook } {
+  const scored = fitCandidates(history, { period, seasonality: "auto", trend: "auto", start }, design);
   const weights = akaikeWeights(scored).filter((w) => w.weight > 0);
   return { best: modelOutlook(lowestAicc(scored), h), blend: weighted(weights.map((w) => modelOutlook(w.model, h)), weights.map((w) => w.weight)) };
 }
@@ -93,6 +120,11 @@ export const METHODS = [
   "dynamic optimised Theta",
   "auto + dynamic optimised Theta, equal",
   "auto + Theta + dynamic opt. Theta, equal",
+  "Comb (simple, Holt, damped; adjusted)",
+  "auto + Comb, equal",
+  "auto + Theta + Comb, equal",
+  "auto, optimised start",
+  "auto opt. start + Theta, equal",
 ] as const;
 
 /** The automatic model's and the Theta method's MSE on the last h values, forecast from h back; null when too short. */
@@ -127,6 +159,8 @@ function outlooks(history: Float64Array, period: number, h: number): Outlook[] {
   const theta = thetaOutlook(history, period, h);
   const optimized = optimizedThetaOutlook(history, period, h, false);
   const dynamic = optimizedThetaOutlook(history, period, h, true);
+  const comb = combOutlook(history, period, h);
+  const optimizedStart = akaike(history, period, h, AUTO_DESIGN, "optimized");
   const validation = validationMse(history, period, h);
   const validationWeights = inverseWeights(validation);
   return [
@@ -145,6 +179,11 @@ function outlooks(history: Float64Array, period: number, h: number): Outlook[] {
     dynamic,
     weighted([auto.best, dynamic], [1, 1]),
     weighted([auto.best, theta, dynamic], [1, 1, 1]),
+    comb,
+    weighted([auto.best, comb], [1, 1]),
+    weighted([auto.best, theta, comb], [1, 1, 1]),
+    optimizedStart.best,
+    weighted([optimizedStart.best, theta], [1, 1]),
   ];
 }
 
