@@ -21,7 +21,8 @@
  * - the M4 competition's "Comb" benchmark (simple, Holt and damped smoothing of the adjusted
  *   history, equal weights), alone and with the automatic model;
  * - the automatic model with the optimised start (initial states fitted with the constants),
- *   alone and with the Theta method;
+ *   alone and with the Theta method, and with a start window of 3 or 4 seasons (2 where the
+ *   history is too short for more): the start using more of the history;
  * - Akaike weights (the engine's akaikeWeights; Kolassa 2011, IJF 27(2)) over the automatic
  *   model's own candidates, and over the whole family (every trend, and the non-seasonal
  *   candidates beside the seasonal ones).
@@ -96,8 +97,14 @@ function weighted(members: Outlook[], weights: number[]): Outlook {
 }
 
 /** The lowest-AICc candidate and the Akaike-weighted combination of all of them, for one design. */
-function akaike(history: Float64Array, period: number, h: number, design: AutoDesign, start?: "optimized"): { best: Outlook; blend: Outlook } {
-  const scored = fitCandidates(history, { period, seasonality: "auto", trend: "auto", start }, design);
+function akaike(history: Float64Array, period: number, h: number, design: AutoDesign, start?: "optimized", cycles?: number): { best: Outlook; blend: Outlook } {
+  let scored;
+  try {
+    scored = fitCandidates(history, { period, seasonality: "auto", trend: "auto", start, cycles }, design);
+  } catch (e) {
+    if (cycles === undefined) throw e;
+    scored = fitCandidates(history, { period, seasonality: "auto", trend: "auto", start }, design);
+  }
   const weights = akaikeWeights(scored).filter((w) => w.weight > 0);
   return { best: modelOutlook(lowestAicc(scored), h), blend: weighted(weights.map((w) => modelOutlook(w.model, h)), weights.map((w) => w.weight)) };
 }
@@ -125,6 +132,8 @@ export const METHODS = [
   "auto + Theta + Comb, equal",
   "auto, optimised start",
   "auto opt. start + Theta, equal",
+  "auto, 3-season window (2 if short)",
+  "auto, 4-season window (2 if short)",
 ] as const;
 
 /** The automatic model's and the Theta method's MSE on the last h values, forecast from h back; null when too short. */
@@ -184,6 +193,8 @@ function outlooks(history: Float64Array, period: number, h: number): Outlook[] {
     weighted([auto.best, theta, comb], [1, 1, 1]),
     optimizedStart.best,
     weighted([optimizedStart.best, theta], [1, 1]),
+    akaike(history, period, h, AUTO_DESIGN, undefined, 3).best,
+    akaike(history, period, h, AUTO_DESIGN, undefined, 4).best,
   ];
 }
 
